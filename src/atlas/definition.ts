@@ -1,0 +1,82 @@
+import type { ExprNode } from '../engine/expr/node.ts';
+import type * as ExprOps from '../engine/expr/build.ts';
+import type { CountSource } from './source.ts';
+import type { FigureItem } from './figure.ts';
+
+/** A complex value in a definition: a real number, or [re, im]. */
+export type ComplexInput = number | readonly [number, number];
+
+/**
+ * One instance of a problem: concrete parameter values. A 'generic' instance draws random complex parameters
+ * from its recorded seed (values omitted); a 'demo' instance is a configuration of our own with real data.
+ */
+export interface InstanceDefinition {
+  readonly id: string;
+  readonly kind: 'generic' | 'demo';
+  readonly label: string;
+  /** The scenario in plain words (our own invented setting, no real people or brands). */
+  readonly description: string;
+  readonly seed: number;
+  /** Parameter values by name; required for 'demo', ignored for 'generic'. */
+  readonly parameters?: Readonly<Record<string, ComplexInput>>;
+}
+
+/**
+ * How to draw an instance: the given configuration, and one real solution (values in the record's coordinates,
+ * real parts only). Both return plane items in world coordinates; `window` is the world rectangle to show.
+ */
+export interface DrawingDefinition {
+  readonly window: (parameters: Readonly<Record<string, number>>) => { xMin: number; xMax: number; yMin: number; yMax: number };
+  readonly configuration: (parameters: Readonly<Record<string, number>>) => FigureItem[];
+  readonly solution: (values: readonly number[], parameters: Readonly<Record<string, number>>) => FigureItem[];
+}
+
+/**
+ * The formulation: named unknowns and parameters, and a function that builds the equations from their nodes
+ * with the expression builders it is handed (`ops`: add, sub, mul, neg, pow, dot, det, constant), so that a
+ * definition file outside the repository needs no import from it.
+ * Optional variable groups (lists of unknown names) give a multihomogeneous structure.
+ * `coordinates` optionally maps a solution to the values stored and shown (default: the unknowns themselves),
+ * for formulations with auxiliary unknowns or charts; realness is judged on these values.
+ */
+export interface FormulationDefinition {
+  readonly unknowns: readonly string[];
+  readonly parameters: readonly string[];
+  readonly equations: (
+    unknowns: Readonly<Record<string, ExprNode>>,
+    parameters: Readonly<Record<string, ExprNode>>,
+    ops: typeof ExprOps,
+  ) => ExprNode[];
+  readonly groups?: readonly (readonly string[])[];
+  /** One or two sentences on the chosen coordinates and why (shown on the page). */
+  readonly description: string;
+  readonly coordinates?: {
+    readonly names: readonly string[];
+    /** Maps a solution (packed complex, unknown order) to packed complex values in `names` order. */
+    readonly map: (x: Float64Array) => Float64Array;
+  };
+}
+
+/** A problem of the atlas: everything a generator needs to solve it and a page needs to explain it. */
+export interface ProblemDefinition {
+  /** Permanent: never renamed once published. Lowercase words joined by hyphens. */
+  readonly slug: string;
+  readonly title: string;
+  readonly family: string;
+  readonly tags: readonly string[];
+  /** The problem in words, Markdown with $…$ TeX. */
+  readonly statement: string;
+  readonly formulation: FormulationDefinition;
+  readonly trueCount: { readonly value: number | null; readonly source: CountSource };
+  /** Where the naive count's excess goes, in our own words (Markdown with $…$ TeX). */
+  readonly excessNote: string;
+  /** A caution shown prominently (for example on kinematics pages), or omitted. */
+  readonly caution?: string;
+  readonly instances: readonly InstanceDefinition[];
+  readonly drawing?: DrawingDefinition;
+}
+
+/** Identity helper that gives a definition module its type checking: `export default defineProblem({ … })`. */
+export function defineProblem(definition: ProblemDefinition): ProblemDefinition {
+  return definition;
+}

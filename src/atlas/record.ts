@@ -1,0 +1,112 @@
+import { z } from 'astro/zod';
+import { countSourceSchema } from './source.ts';
+import { figureSchema } from './figure.ts';
+
+/** The record format's version; bump it on any incompatible change and teach the reader to migrate. */
+export const RECORD_SCHEMA_VERSION = 1;
+
+/** A complex number as [re, im], each rounded to fixed significant digits by the writer. */
+export const complexSchema = z.tuple([z.number(), z.number()]);
+
+/** One solution of one instance, in the coordinates named by the record's `coordinates`. */
+export const solutionSchema = z.object({
+  values: z.array(complexSchema),
+  /** ‖F(x)‖∞ / (1 + ‖x‖∞) after refinement. */
+  residual: z.number().nonnegative(),
+  /** Condition estimate of the Jacobian at the solution; null when singular (infinite). */
+  condition: z.number().positive().nullable(),
+  /** Multiplicity estimate (1 for nonsingular). */
+  multiplicity: z.number().int().positive(),
+  real: z.boolean(),
+  certified: z.boolean(),
+  certifiedReal: z.boolean(),
+});
+
+/** How the paths of one solve ended; the four outcomes add up to `tracked`. */
+export const pathStatsSchema = z
+  .object({
+    tracked: z.number().int().nonnegative(),
+    nonsingular: z.number().int().nonnegative(),
+    singular: z.number().int().nonnegative(),
+    atInfinity: z.number().int().nonnegative(),
+    failed: z.number().int().nonnegative(),
+    failures: z.record(z.string(), z.number().int().nonnegative()),
+    stepsMedian: z.number().nonnegative(),
+    stepsMax: z.number().int().nonnegative(),
+    retries: z.number().int().nonnegative(),
+  })
+  .refine((p) => p.nonsingular + p.singular + p.atInfinity + p.failed === p.tracked, {
+    error: 'path outcomes do not add up to the paths tracked',
+  });
+
+/** The count ladder of one instance: naive bound, true count, and what was found and proven. */
+export const countsSchema = z.object({
+  bezoutBound: z.number().int().positive(),
+  multihomogeneousBound: z.number().int().positive().nullable(),
+  trueCount: z.number().int().nonnegative().nullable(),
+  found: z.number().int().nonnegative(),
+  certified: z.number().int().nonnegative(),
+  certifiedDistinct: z.number().int().nonnegative(),
+  real: z.number().int().nonnegative(),
+  certifiedReal: z.number().int().nonnegative(),
+  /** True only when certifiedDistinct equals the published generic count; completeness then rests on that count. */
+  complete: z.boolean(),
+});
+
+/** The solve of one instance of a problem. */
+export const instanceResultSchema = z.object({
+  id: z.string().regex(/^[a-z0-9-]+$/),
+  kind: z.enum(['generic', 'demo']),
+  label: z.string().min(1),
+  description: z.string(),
+  seed: z.number().int().nonnegative(),
+  method: z.string().min(1),
+  parameters: z.record(z.string(), complexSchema),
+  counts: countsSchema,
+  paths: pathStatsSchema,
+  solutions: z.array(solutionSchema),
+  figure: figureSchema.nullable(),
+  /** Plain-language notes the engine produced (why a count falls short, what was retried). */
+  notes: z.array(z.string()),
+});
+
+/** One entry of a record's history: when it was replaced, by which engine, and what changed. */
+export const historyEntrySchema = z.object({
+  date: z.string().regex(/^\d{4}-\d{2}-\d{2}$/),
+  engineVersion: z.string().min(1),
+  change: z.string().min(1),
+});
+
+/** The solve record of one problem, written to content/records/<slug>.json. */
+export const solveRecordSchema = z.object({
+  schemaVersion: z.literal(RECORD_SCHEMA_VERSION),
+  slug: z.string().regex(/^[a-z0-9]+(?:-[a-z0-9]+)*$/),
+  title: z.string().min(1),
+  family: z.string().min(1),
+  tags: z.array(z.string()),
+  statement: z.string().min(1),
+  excessNote: z.string().min(1),
+  caution: z.string().nullable(),
+  trueCount: z.number().int().nonnegative().nullable(),
+  source: countSourceSchema,
+  formulation: z.object({
+    unknowns: z.array(z.string()),
+    parameters: z.array(z.string()),
+    equationDegrees: z.array(z.number().int().nonnegative()),
+    groups: z.array(z.array(z.string())).nullable(),
+    description: z.string(),
+  }),
+  /** Names of the values stored per solution (the solution's documented chart). */
+  coordinates: z.array(z.string()),
+  engineVersion: z.string().min(1),
+  definitionHash: z.string().regex(/^[0-9a-f]{16,64}$/),
+  instances: z.array(instanceResultSchema).min(1),
+  history: z.array(historyEntrySchema),
+});
+
+export type Solution = z.infer<typeof solutionSchema>;
+export type PathStats = z.infer<typeof pathStatsSchema>;
+export type Counts = z.infer<typeof countsSchema>;
+export type InstanceResult = z.infer<typeof instanceResultSchema>;
+export type HistoryEntry = z.infer<typeof historyEntrySchema>;
+export type SolveRecord = z.infer<typeof solveRecordSchema>;

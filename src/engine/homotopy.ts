@@ -1,0 +1,57 @@
+/**
+ * The contract between the path tracker and whatever it tracks. All complex vectors are packed Float64Arrays
+ * (re, im interleaved): a vector of n complex numbers has length 2n; an n×n complex matrix is row-major with
+ * length 2n², entry (i, j) at [2(i·n + j), 2(i·n + j) + 1].
+ *
+ * A homotopy H(x, t) runs from a start system at t = 0 to the target system at t = 1. The path parameter t is
+ * complex so that endgames may loop around t = 1 (Cauchy endgame); ordinary tracking keeps tIm = 0.
+ */
+export interface Homotopy {
+  /** Number of complex unknowns (and equations: the system is square). */
+  readonly n: number;
+  /** Fills h = H(x, t) (length 2n), jac = ∂H/∂x (length 2n²) and ht = ∂H/∂t (length 2n). Allocates nothing. */
+  evaluate(x: Float64Array, tRe: number, tIm: number, h: Float64Array, jac: Float64Array, ht: Float64Array): void;
+  /** Fills h = H(x, t) only; optional fast path for residual checks. Allocates nothing. */
+  evaluateValue?(x: Float64Array, tRe: number, tIm: number, h: Float64Array): void;
+  /** A linear solver fitted to this homotopy's Jacobian structure (block elimination, say); dense LU if absent. */
+  createSolver?(): LinearSolver;
+}
+
+/** Factor-then-solve for one n×n complex matrix at a time; buffers are owned by the solver and reused. */
+export interface LinearSolver {
+  /**
+   * Factors the matrix (which the solver may overwrite) and returns an estimate of its condition number in
+   * the 1-norm or ∞-norm (within a factor of about n of the true value); Infinity when the matrix is
+   * numerically singular (a zero pivot).
+   */
+  factor(matrix: Float64Array): number;
+  /** Solves A·out = b with the last factored matrix; `out` may alias `b`. Allocates nothing. */
+  solve(b: Float64Array, out: Float64Array): void;
+}
+
+/** How a tracked path ended. Every tracked path gets exactly one of these. */
+export type PathOutcome = 'regular' | 'singular' | 'at-infinity' | 'failed';
+
+/** Why a path failed, when it did. */
+export type FailureReason = 'step-underflow' | 'step-budget' | 'no-convergence' | 'non-finite';
+
+/** The end of one tracked path, in the target system's own (affine) coordinates where finite. */
+export interface PathEnd {
+  readonly outcome: PathOutcome;
+  /** The endpoint (packed complex, length 2n); for 'at-infinity' and 'failed' it is the last point reached. */
+  readonly point: Float64Array;
+  /** ‖H(x, 1)‖∞ / (1 + ‖x‖∞) at the endpoint. */
+  readonly residual: number;
+  /** Condition estimate of ∂H/∂x at the endpoint (Infinity when singular). */
+  readonly condition: number;
+  /** Estimated winding number (multiplicity indicator) from the endgame; 1 for regular ends. */
+  readonly windingNumber: number;
+  /** Accepted predictor–corrector steps. */
+  readonly steps: number;
+  /** Steps rejected (Newton did not contract, or the predictor error was too large). */
+  readonly rejectedSteps: number;
+  /** How many times the path was retried with stricter settings before this result. */
+  readonly retries: number;
+  /** Present only for 'failed'. */
+  readonly failure?: FailureReason;
+}
