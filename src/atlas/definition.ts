@@ -57,6 +57,15 @@ export interface FormulationDefinition {
   };
 }
 
+/**
+ * How the generator solves a problem. 'total-degree' and 'multihomogeneous' track every path of the start
+ * system (the naive count at work); richer strategies (parameter homotopy from a stored generic solution set,
+ * monodromy) extend this union.
+ */
+export type SolverChoice =
+  | { readonly kind: 'total-degree' }
+  | { readonly kind: 'multihomogeneous' };
+
 /** A problem of the atlas: everything a generator needs to solve it and a page needs to explain it. */
 export interface ProblemDefinition {
   /** Permanent: never renamed once published. Lowercase words joined by hyphens. */
@@ -73,6 +82,8 @@ export interface ProblemDefinition {
   /** A caution shown prominently (for example on kinematics pages), or omitted. */
   readonly caution?: string;
   readonly instances: readonly InstanceDefinition[];
+  /** Defaults to total degree. */
+  readonly solver?: SolverChoice;
   readonly drawing?: DrawingDefinition;
 }
 
