@@ -1,0 +1,46 @@
+import type { ExprNode } from '../../../src/engine/expr/node.ts';
+import type * as ExprOps from '../../../src/engine/expr/build.ts';
+import { multiply, plus, type ExprPolynomial } from '../shared/univariate.ts';
+import { CONIC_LETTERS } from './conic-names.ts';
+import { conicAt, conicMatrix } from './conic-expr.ts';
+import { checkShape, type TangencyShape } from './tangency-layout.ts';
+
+type Ops = typeof ExprOps;
+
+/** Unknowns of the compact formulation: the conic a·x² + b·xy + c·y² + d·x + e·y + 1 (chart f = 1). */
+export const SEXTIC_UNKNOWNS = ['a', 'b', 'c', 'd', 'e'] as const;
+
+/**
+ * The tangency condition of conics U and A: the discriminant of the binary cubic det(s·A + t·U), written with s = 1
+ * as c₃t³ + c₂t² + c₁t + c₀: Δ = c₂²c₁² − 4c₃c₁³ − 4c₂³c₀ − 27c₃²c₀² + 18c₃c₂c₁c₀. Degree 6 in U and in A
+ * (Salmon's tact-invariant); it also vanishes when U is a double line, which is where the naive count's excess goes.
+ */
+export function tangencyDiscriminant(ops: Ops, u: readonly ExprNode[], a: readonly ExprNode[]): ExprNode {
+  const U = conicMatrix(ops, u), A = conicMatrix(ops, a);
+  const m = A.map((row, i) => row.map((entry, j): ExprPolynomial => [entry, U[i]![j]!]));
+  const minus = (p: ExprPolynomial, q: ExprPolynomial): ExprPolynomial => plus(ops, p, q.map((c) => (c ? ops.neg(c) : null)));
+  const e = (i: number, j: number): ExprPolynomial => m[i]![j]!;
+  const minor = (r0: number, r1: number, c0: number, c1: number): ExprPolynomial => minus(multiply(ops, e(r0, c0), e(r1, c1)), multiply(ops, e(r0, c1), e(r1, c0)));
+  const det = plus(ops, minus(multiply(ops, e(0, 0), minor(1, 2, 1, 2)), multiply(ops, e(0, 1), minor(1, 2, 0, 2))), multiply(ops, e(0, 2), minor(1, 2, 0, 1)));
+  const [k0, k1, k2, k3] = [0, 1, 2, 3].map((k) => det[k] ?? ops.constant(0)) as [ExprNode, ExprNode, ExprNode, ExprNode];
+  return ops.add(
+    ops.mul(ops.pow(k2, 2), ops.pow(k1, 2)),
+    ops.mul(-4, k3, ops.pow(k1, 3)),
+    ops.mul(-4, ops.pow(k2, 3), k0),
+    ops.mul(-27, ops.pow(k3, 2), ops.pow(k0, 2)),
+    ops.mul(18, k3, k2, k1, k0),
+  );
+}
+
+/**
+ * Equations of the compact formulation of "conics through p points tangent to k conics": one linear equation per
+ * point (the conic passes through it) and one sextic per given conic (the tangency discriminant). Bézout 6^k.
+ */
+export function sexticEquations(shape: TangencyShape, unknowns: Readonly<Record<string, ExprNode>>, parameters: Readonly<Record<string, ExprNode>>, ops: Ops): ExprNode[] {
+  checkShape(shape);
+  const u = [...SEXTIC_UNKNOWNS.map((n) => unknowns[n]!), ops.constant(1)];
+  const equations: ExprNode[] = [];
+  for (let j = 1; j <= shape.points; j++) equations.push(conicAt(ops, u, [parameters[`x${j}`]!, parameters[`y${j}`]!, ops.constant(1)]));
+  for (let i = 1; i <= shape.conics; i++) equations.push(tangencyDiscriminant(ops, u, CONIC_LETTERS.map((l) => parameters[`${l}${i}`]!)));
+  return equations;
+}
