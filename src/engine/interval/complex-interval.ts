@@ -1,0 +1,71 @@
+import { nextDown, nextUp } from './next-float.ts';
+import { mulHi, mulLo, scaleHi, scaleLo, sqrHi, sqrLo } from './bounds.ts';
+
+/**
+ * Complex interval arithmetic on rectangles [reLo, reHi, imLo, imHi] stored in Float64Arrays (4 doubles per
+ * value): op(out, o, a, ia, b, ib) writes a rectangle enclosing {z op w : z ∈ a, w ∈ b}. Built from the
+ * outward-rounded real endpoint formulas, so enclosures hold without rounding-mode control. Rectangles are not
+ * closed under multiplication: the product rectangle over-approximates (never under-approximates) the true set.
+ */
+
+/** a + b. */
+export function complexAdd(out: Float64Array, o: number, a: Float64Array, ia: number, b: Float64Array, ib: number): void {
+  out[o] = nextDown(a[ia]! + b[ib]!);
+  out[o + 1] = nextUp(a[ia + 1]! + b[ib + 1]!);
+  out[o + 2] = nextDown(a[ia + 2]! + b[ib + 2]!);
+  out[o + 3] = nextUp(a[ia + 3]! + b[ib + 3]!);
+}
+
+/** a − b. */
+export function complexSub(out: Float64Array, o: number, a: Float64Array, ia: number, b: Float64Array, ib: number): void {
+  out[o] = nextDown(a[ia]! - b[ib + 1]!);
+  out[o + 1] = nextUp(a[ia + 1]! - b[ib]!);
+  out[o + 2] = nextDown(a[ia + 2]! - b[ib + 3]!);
+  out[o + 3] = nextUp(a[ia + 3]! - b[ib + 2]!);
+}
+
+/** −a (exact). */
+export function complexNeg(out: Float64Array, o: number, a: Float64Array, ia: number): void {
+  const r0 = a[ia]!, r1 = a[ia + 1]!, i0 = a[ia + 2]!, i1 = a[ia + 3]!;
+  out[o] = -r1;
+  out[o + 1] = -r0;
+  out[o + 2] = -i1;
+  out[o + 3] = -i0;
+}
+
+/** a · b: real part A·C − B·D, imaginary part A·D + B·C, each term outward rounded. */
+export function complexMul(out: Float64Array, o: number, a: Float64Array, ia: number, b: Float64Array, ib: number): void {
+  const a0 = a[ia]!, a1 = a[ia + 1]!, b0 = a[ia + 2]!, b1 = a[ia + 3]!;
+  const c0 = b[ib]!, c1 = b[ib + 1]!, d0 = b[ib + 2]!, d1 = b[ib + 3]!;
+  out[o] = nextDown(mulLo(a0, a1, c0, c1) - mulHi(b0, b1, d0, d1));
+  out[o + 1] = nextUp(mulHi(a0, a1, c0, c1) - mulLo(b0, b1, d0, d1));
+  out[o + 2] = nextDown(mulLo(a0, a1, d0, d1) + mulLo(b0, b1, c0, c1));
+  out[o + 3] = nextUp(mulHi(a0, a1, d0, d1) + mulHi(b0, b1, c0, c1));
+}
+
+/** a²: real part A² − B² (squares, not products), imaginary part 2·A·B. */
+export function complexSqr(out: Float64Array, o: number, a: Float64Array, ia: number): void {
+  const a0 = a[ia]!, a1 = a[ia + 1]!, b0 = a[ia + 2]!, b1 = a[ia + 3]!;
+  const lo = nextDown(sqrLo(a0, a1) - sqrHi(b0, b1));
+  const hi = nextUp(sqrHi(a0, a1) - sqrLo(b0, b1));
+  const ilo = nextDown(2 * mulLo(a0, a1, b0, b1)); // doubling is exact except at overflow, so widen anyway
+  const ihi = nextUp(2 * mulHi(a0, a1, b0, b1));
+  out[o] = lo;
+  out[o + 1] = hi;
+  out[o + 2] = ilo;
+  out[o + 3] = ihi;
+}
+
+/** The product of an exact complex double cr + i·ci and a rectangle b. */
+export function complexScale(out: Float64Array, o: number, cr: number, ci: number, b: Float64Array, ib: number): void {
+  const c0 = b[ib]!, c1 = b[ib + 1]!, d0 = b[ib + 2]!, d1 = b[ib + 3]!;
+  out[o] = nextDown(scaleLo(cr, c0, c1) - scaleHi(ci, d0, d1));
+  out[o + 1] = nextUp(scaleHi(cr, c0, c1) - scaleLo(ci, d0, d1));
+  out[o + 2] = nextDown(scaleLo(cr, d0, d1) + scaleLo(ci, c0, c1));
+  out[o + 3] = nextUp(scaleHi(cr, d0, d1) + scaleHi(ci, c0, c1));
+}
+
+/** True when rectangle a lies in the interior of rectangle b (strict on all four sides; false on NaN). */
+export function complexInInterior(a: Float64Array, ia: number, b: Float64Array, ib: number): boolean {
+  return a[ia]! > b[ib]! && a[ia + 1]! < b[ib + 1]! && a[ia + 2]! > b[ib + 2]! && a[ia + 3]! < b[ib + 3]!;
+}
