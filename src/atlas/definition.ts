@@ -23,10 +23,11 @@ export interface InstanceDefinition {
 
 /**
  * How to draw an instance: the given configuration, and one real solution (values in the record's coordinates,
- * real parts only). Both return plane items in world coordinates; `window` is the world rectangle to show.
+ * real parts only). Both return plane items in world coordinates; `window` is the world rectangle to show,
+ * given the parameters and, when the caller has them, every item drawn (configuration and all real solutions).
  */
 export interface DrawingDefinition {
-  readonly window: (parameters: Readonly<Record<string, number>>) => { xMin: number; xMax: number; yMin: number; yMax: number };
+  readonly window: (parameters: Readonly<Record<string, number>>, items?: readonly FigureItem[]) => { xMin: number; xMax: number; yMin: number; yMax: number };
   readonly configuration: (parameters: Readonly<Record<string, number>>) => FigureItem[];
   readonly solution: (values: readonly number[], parameters: Readonly<Record<string, number>>) => FigureItem[];
 }

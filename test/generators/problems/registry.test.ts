@@ -1,0 +1,61 @@
+import { describe, expect, it } from 'vitest';
+import { problems } from '../../../generators/problems/index.ts';
+import { validateDefinition } from '../../../src/atlas/validate-definition.ts';
+import { systemOf } from '../../../src/atlas/system-of.ts';
+import { parametersOf } from '../../../src/atlas/parameters-of.ts';
+import { countSourceSchema } from '../../../src/atlas/source.ts';
+import { figureItemSchema } from '../../../src/atlas/figure.ts';
+import { degree } from '../../../src/engine/expr/degree.ts';
+
+// The Bézout bound of each formulation, product of the equation degrees read off the graph. These are our own
+// derivations ("[derived]" in REFERENCES.md), recomputed by hand beside each row.
+const expectedBezout: Record<string, number> = {
+  'circles-tangent-to-three-circles': 8, // three quadrics in (D, E, F)
+};
+
+describe('the problem registry', () => {
+  it('has unique permanent slugs in lowercase-hyphen form', () => {
+    const slugs = problems.map((p) => p.slug);
+    expect(new Set(slugs).size).toBe(slugs.length);
+    for (const s of slugs) expect(s).toMatch(/^[a-z0-9]+(?:-[a-z0-9]+)*$/);
+  });
+
+  describe.each(problems.map((p) => [p.slug, p] as const))('%s', (slug, definition) => {
+    it('passes the definition validator (schema, names, square system, TeX renders with KaTeX)', () => {
+      const check = validateDefinition(definition);
+      expect(check.issues).toEqual([]);
+    });
+
+    it('names its source in the count-source schema', () => {
+      expect(countSourceSchema.safeParse(definition.trueCount.source).success).toBe(true);
+    });
+
+    it('has a generic instance with a seed and a demo instance with real data', () => {
+      expect(definition.instances.some((i) => i.kind === 'generic')).toBe(true);
+      const demos = definition.instances.filter((i) => i.kind === 'demo');
+      expect(demos.length).toBeGreaterThan(0);
+      for (const demo of demos) {
+        const p = parametersOf(definition, demo);
+        for (let j = 1; j < p.length; j += 2) expect(p[j]).toBe(0);
+      }
+    });
+
+    it('has the Bézout bound of its formulation', () => {
+      const system = systemOf(definition);
+      const bound = system.equations.reduce((b, e) => b * degree(e), 1);
+      expect(bound).toBe(expectedBezout[slug]);
+    });
+
+    it('draws each demo configuration with valid figure items inside a finite window', () => {
+      if (!definition.drawing) return;
+      for (const demo of definition.instances.filter((i) => i.kind === 'demo')) {
+        const p = Object.fromEntries(Object.entries(demo.parameters ?? {}).map(([k, v]) => [k, typeof v === 'number' ? v : v[0]]));
+        const items = definition.drawing.configuration(p);
+        for (const item of items) expect(figureItemSchema.safeParse(item).success).toBe(true);
+        const w = definition.drawing.window(p, items);
+        expect(w.xMax).toBeGreaterThan(w.xMin);
+        expect(w.yMax).toBeGreaterThan(w.yMin);
+      }
+    });
+  });
+});
