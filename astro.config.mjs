@@ -1,0 +1,20 @@
+// @ts-check
+import { defineConfig } from 'astro/config';
+import mdx from '@astrojs/mdx';
+import { satteri } from '@astrojs/markdown-satteri';
+import { satteriKatex } from './src/site/satteri-katex.ts';
+import { pagefindIndex } from './src/site/pagefind-integration.ts';
+
+// The atlas is static: stable directory URLs with a trailing slash, Sätteri Markdown with KaTeX at build time
+// (a bad formula throws), and a Pagefind index written after every build. Content root: src/site/content-dir.ts.
+export default defineConfig({
+  site: 'https://atlas.enumerative.example',
+  output: 'static',
+  trailingSlash: 'always',
+  build: { format: 'directory' },
+  compressHTML: true,
+  markdown: {
+    processor: satteri({ features: { math: true }, mdastPlugins: [satteriKatex({ throwOnError: true, strict: 'error' })] }),
+  },
+  integrations: [mdx(), pagefindIndex()],
+});

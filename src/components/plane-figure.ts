@@ -1,0 +1,44 @@
+// Client-side only: the <plane-figure> custom element. The SVG inside is complete without JavaScript; this adds
+// pan/zoom (d3-zoom on the <svg>, transform on g.viewport), layer toggle buttons, and data-ready when hydrated.
+import { select } from 'd3-selection';
+import { zoom, zoomIdentity, type ZoomBehavior } from 'd3-zoom';
+
+class PlaneFigure extends HTMLElement {
+  #zoom: ZoomBehavior<SVGSVGElement, unknown> | null = null;
+
+  connectedCallback(): void {
+    const svg = this.querySelector<SVGSVGElement>('svg');
+    const viewport = svg?.querySelector<SVGGElement>('g.viewport');
+    if (!svg || !viewport) return;
+    const width = svg.viewBox.baseVal.width, height = svg.viewBox.baseVal.height;
+    const behaviour = zoom<SVGSVGElement, unknown>()
+      .scaleExtent([0.5, 40])
+      .extent([[0, 0], [width, height]])
+      .on('zoom', (event) => {
+        viewport.setAttribute('transform', event.transform.toString());
+        this.toggleAttribute('data-zoomed', event.transform.k !== 1 || event.transform.x !== 0 || event.transform.y !== 0);
+      });
+    select(svg).call(behaviour);
+    this.#zoom = behaviour;
+    for (const button of this.querySelectorAll<HTMLButtonElement>('button[data-toggle-layer]')) {
+      button.addEventListener('click', () => this.#toggle(button));
+    }
+    this.querySelector<HTMLButtonElement>('button[data-reset-view]')?.addEventListener('click', () => {
+      if (this.#zoom) select(svg).call(this.#zoom.transform, zoomIdentity);
+    });
+    this.querySelector<HTMLElement>('.figure-tools')?.removeAttribute('hidden');
+    this.setAttribute('data-ready', '');
+  }
+
+  #toggle(button: HTMLButtonElement): void {
+    const layer = button.dataset.toggleLayer;
+    const shown = button.getAttribute('aria-pressed') !== 'true';
+    button.setAttribute('aria-pressed', String(shown));
+    for (const group of this.querySelectorAll<SVGGElement>(`g[data-layer-group="${CSS.escape(layer ?? '')}"]`)) {
+      if (shown) group.removeAttribute('display');
+      else group.setAttribute('display', 'none');
+    }
+  }
+}
+
+if (!customElements.get('plane-figure')) customElements.define('plane-figure', PlaneFigure);
