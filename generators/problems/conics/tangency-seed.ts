@@ -1,11 +1,11 @@
 import type { RandomSource } from '../../../src/engine/random.ts';
-import { createArrowheadSolver } from '../../../src/engine/linalg/arrowhead-solver.ts';
+import { createDenseLU } from '../../../src/engine/linalg/dense-lu.ts';
 import { coefficientGradient, conicTimesPoint, cross3, dot3Im, dot3Re } from './conic-kernels.ts';
 import { chartCount, checkShape, parameterCount, pointOf, unknownCount, type TangencyShape } from './tangency-layout.ts';
 
 /** Solves the dense complex n×n system A·x = b (packed) by LU with partial pivoting; throws when singular. */
 function solveDense(n: number, A: Float64Array, b: Float64Array): Float64Array {
-  const solver = createArrowheadSolver({ n, shared: Array.from({ length: n }, (_, i) => i), blocks: [], border: Array.from({ length: n }, (_, i) => i) });
+  const solver = createDenseLU(n);
   if (!Number.isFinite(solver.factor(A))) throw new Error('tangency seed: singular linear system (draw another seed)');
   const x = new Float64Array(2 * n);
   solver.solve(b, x);

@@ -1,0 +1,112 @@
+import type { PathEnd } from '../homotopy.ts';
+import type { PolynomialSystem } from '../expr/node.ts';
+import { createRandom } from '../random.ts';
+import { bezoutBound, multihomogeneousBound } from '../start/bounds.ts';
+import { isRealPoint } from '../solve/real.ts';
+import type { FoundSolution, PathStatistics, SolveReport } from '../solve/types.ts';
+import type { TrackerSettings } from '../track/settings.ts';
+import { createPointIndex } from './point-index.ts';
+import { createModuleLegTracker, type HomotopyModuleRef } from './module-tracker.ts';
+import { routeThrough, randomGamma, type LegTracker } from './route.ts';
+import { trackRoute } from './track-route.ts';
+
+/** A problem solved from a stored generic solution set. */
+export interface ParameterProblem {
+  /** The system shown on the page: its Bézout bound is reported, and solutions are given in its unknowns. */
+  readonly shown: PolynomialSystem;
+  /** The system actually tracked, as a worker-loadable homotopy module (see module-tracker.ts). */
+  readonly working: HomotopyModuleRef;
+  /** A generic start: its parameters and all its solutions, in the working coordinates (packed complex). */
+  readonly start: { readonly parameters: Float64Array; readonly solutions: readonly Float64Array[] };
+  /** Maps a working solution to the shown unknowns (packed complex). */
+  readonly toShown: (x: Float64Array) => Float64Array;
+}
+
+export interface ParameterSolveOptions {
+  /** Seeds the route's random parameter point and gammas. Same seed ⇒ same report. */
+  readonly seed: number;
+  /** 'detour' (default): through a random complex parameter point; 'direct': one gamma-trick leg. */
+  readonly route?: 'detour' | 'direct';
+  readonly settings?: Partial<TrackerSettings>;
+  /** How legs are tracked (a worker-pool LegTracker, say); default: on this thread. */
+  readonly track?: LegTracker;
+}
+
+/** SolveReport with the parameter-homotopy start and the jump check's counts. */
+export interface ParameterSolveReport extends Omit<SolveReport, 'startSystem'> {
+  readonly startSystem: 'parameter-homotopy';
+  /** Starts re-tracked with safe settings because two paths met; regular ends still coinciding afterwards. */
+  readonly jumpRetracks: number;
+  readonly duplicates: number;
+}
+
+/**
+ * Solves the shown system at `target` (packed complex, the shown system's parameter order) by coefficient-parameter
+ * homotopy (Morgan–Sommese, Appl. Math. Comput. 29, 1989) from the stored generic set, with the jump check of
+ * trackRoute. Solutions: distinct regular ends (relative tolerance 1e-8) mapped to the shown unknowns, sorted by
+ * their coordinates; residual and condition are the working system's at the end. Bounds are read off `shown`.
+ */
+export async function solveByParameterHomotopy(problem: ParameterProblem, target: Float64Array, options: ParameterSolveOptions): Promise<ParameterSolveReport> {
+  const began = performance.now();
+  if (target.length !== problem.start.parameters.length) {
+    throw new RangeError(`parameter homotopy: target has ${target.length / 2} complex parameters, the stored start ${problem.start.parameters.length / 2}`);
+  }
+  const random = createRandom(options.seed);
+  const legs = options.route === 'direct'
+    ? [{ from: problem.start.parameters, to: target, gamma: randomGamma(random) }]
+    : routeThrough(problem.start.parameters, target, random);
+  const track = options.track ?? (await createModuleLegTracker(problem.working, options.settings));
+  const route = await trackRoute(track, legs, problem.start.solutions);
+  const found = collect(route.ends, problem.toShown);
+  return {
+    bezoutBound: bezoutBound(problem.shown),
+    multihomogeneousBound: multihomogeneousBound(problem.shown),
+    startSystem: 'parameter-homotopy',
+    ends: route.ends,
+    solutions: found,
+    singular: [],
+    stats: statistics(route.ends),
+    seconds: (performance.now() - began) / 1000,
+    jumpRetracks: route.jumpRetracks,
+    duplicates: route.duplicates,
+  };
+}
+
+function collect(ends: readonly PathEnd[], toShown: (x: Float64Array) => Float64Array): FoundSolution[] {
+  const out: FoundSolution[] = [];
+  let index: ReturnType<typeof createPointIndex> | null = null;
+  ends.forEach((e, i) => {
+    if (e.outcome !== 'regular') return;
+    index ??= createPointIndex(e.point.length / 2);
+    const j = index.find(e.point);
+    if (j >= 0) { out[j]!.paths.push(i); out[j]!.multiplicity++; return; }
+    index.add(e.point);
+    const point = toShown(e.point);
+    out.push({ point, residual: e.residual, condition: e.condition, multiplicity: 1, real: isRealPoint(point), paths: [i] });
+  });
+  return out.sort((a, b) => compareLexicographic(a.point, b.point));
+}
+
+/** Orders points by their coordinates (re, im, …), each rounded to 9 significant digits so that noise cannot flip the order of distinct points. */
+export function compareLexicographic(a: Float64Array, b: Float64Array): number {
+  for (let i = 0; i < Math.min(a.length, b.length); i++) {
+    const x = Number(a[i]!.toPrecision(9)), y = Number(b[i]!.toPrecision(9));
+    if (x !== y) return x - y;
+  }
+  return a.length - b.length;
+}
+
+/** Path counts that add up, with the median and largest step counts and the total retries. */
+export function statistics(ends: readonly PathEnd[]): PathStatistics {
+  const failures: Record<string, number> = {};
+  let regular = 0, singular = 0, atInfinity = 0, failed = 0, retries = 0;
+  for (const e of ends) {
+    if (e.outcome === 'regular') regular++;
+    else if (e.outcome === 'singular') singular++;
+    else if (e.outcome === 'at-infinity') atInfinity++;
+    else { failed++; failures[e.failure ?? 'unknown'] = (failures[e.failure ?? 'unknown'] ?? 0) + 1; }
+    retries += e.retries;
+  }
+  const steps = ends.map((e) => e.steps).sort((a, b) => a - b);
+  return { tracked: ends.length, regular, singular, atInfinity, failed, failures, stepsMedian: steps.length ? steps[steps.length >> 1]! : 0, stepsMax: steps.length ? steps[steps.length - 1]! : 0, retries };
+}
