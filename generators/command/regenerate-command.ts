@@ -1,0 +1,31 @@
+import { AtlasError } from '../pipeline/atlas-error.ts';
+import { loadRegistry, loadTarget } from '../pipeline/registry.ts';
+import { contentRoot } from '../write/content-paths.ts';
+import { publish } from '../write/publish.ts';
+import type { CommandContext } from './context.ts';
+import { eachProblem } from './each-problem.ts';
+import { integerOption, parseOptions } from './parse-options.ts';
+import { reportPublished } from './report-publish.ts';
+import { solveWithProgress } from './run-solve.ts';
+import { textSummary } from './summary.ts';
+
+const USAGE = 'regenerate [<slug | path/to/definition.ts>… | --all] [--force] [--workers N] [--content DIR]';
+
+/**
+ * `regenerate`: solves the named problems (or all of the registry) and writes their records and pages, refusing
+ * to replace a better published record unless --force. Goes on past a failing problem; exits with the worst code.
+ */
+export async function regenerateCommand(args: readonly string[], ctx: CommandContext): Promise<number> {
+  const { values, positionals } = parseOptions(args, { all: { type: 'boolean' }, force: { type: 'boolean' }, workers: { type: 'string' } }, USAGE);
+  if (Boolean(values.all) === positionals.length > 0) throw new AtlasError('input', `name the problems to regenerate, or --all (not both)\nusage: ${USAGE}`);
+  const workers = integerOption(values.workers, 'workers', 1);
+  const root = contentRoot(values.content);
+  const targets: readonly string[] = values.all ? (await loadRegistry(ctx.problemsDir)).map((d) => d.definition.slug) : positionals;
+  const engine = await ctx.loadEngine();
+  return eachProblem(ctx, targets, async (target) => {
+    const loaded = await loadTarget(target, ctx.problemsDir);
+    const solved = await solveWithProgress(ctx, engine, loaded, { workers });
+    ctx.stdout.write(textSummary(solved.record, solved.seconds));
+    return reportPublished(ctx, loaded.definition.slug, publish(root, solved.record, { force: Boolean(values.force) }));
+  });
+}

@@ -1,0 +1,48 @@
+import { writeFileSync } from 'node:fs';
+import { resolve } from 'node:path';
+import { canonicalJson } from '../../src/atlas/canonical-json.ts';
+import { AtlasError } from '../pipeline/atlas-error.ts';
+import { loadTarget, isFileTarget } from '../pipeline/registry.ts';
+import { solveShard } from '../pipeline/solve-part.ts';
+import { contentRoot } from '../write/content-paths.ts';
+import type { CommandContext } from './context.ts';
+import { EXIT } from './exit-codes.ts';
+import { integerOption, parseOptions, shardOption } from './parse-options.ts';
+import { publish } from '../write/publish.ts';
+import { reportPublished } from './report-publish.ts';
+import { solveWithProgress } from './run-solve.ts';
+import { jsonSummary, textSummary } from './summary.ts';
+
+const USAGE = 'solve <slug | path/to/definition.ts> [--json] [--seed N] [--workers N] [--write [--force]] [--shard k/n --out part.json] [--content DIR]';
+
+/**
+ * `solve`: solves one problem (registry slug or definition file) and prints a summary; --json prints exactly one
+ * JSON object on stdout (the first demo instance). Writes content only with --write (through the regression
+ * guard); with --shard k/n --out FILE it solves batch k of n and writes a part file for `merge` instead.
+ */
+export async function solveCommand(args: readonly string[], ctx: CommandContext): Promise<number> {
+  const { values, positionals } = parseOptions(args, {
+    json: { type: 'boolean' }, seed: { type: 'string' }, workers: { type: 'string' }, write: { type: 'boolean' },
+    force: { type: 'boolean' }, shard: { type: 'string' }, out: { type: 'string' },
+  }, USAGE);
+  if (positionals.length !== 1) throw new AtlasError('input', `solve takes one problem, got ${positionals.length}\nusage: ${USAGE}`);
+  const seed = integerOption(values.seed, 'seed');
+  const workers = integerOption(values.workers, 'workers', 1);
+  const shard = shardOption(values.shard);
+  if ((shard === undefined) !== (values.out === undefined)) throw new AtlasError('input', `--shard and --out go together\nusage: ${USAGE}`);
+  const target = positionals[0]!;
+  const loaded = await loadTarget(target, ctx.problemsDir);
+  const engine = await ctx.loadEngine();
+  if (shard) {
+    const part = await solveShard(loaded, isFileTarget(target) ? resolve(target) : target, engine, shard, { seed, workers });
+    writeFileSync(resolve(values.out!), canonicalJson(part));
+    ctx.stderr.write(`wrote batch ${shard.index + 1} of ${shard.count} of ${loaded.definition.slug} to ${values.out}\n`);
+    return EXIT.ok;
+  }
+  const solved = await solveWithProgress(ctx, engine, loaded, { seed, workers });
+  if (values.json) ctx.stdout.write(`${JSON.stringify(jsonSummary(solved.record, solved.seconds))}\n`);
+  else ctx.stdout.write(textSummary(solved.record, solved.seconds));
+  if (!values.write) return EXIT.ok;
+  const outcome = publish(contentRoot(values.content), solved.record, { force: Boolean(values.force) });
+  return reportPublished(ctx, solved.record.slug, outcome);
+}

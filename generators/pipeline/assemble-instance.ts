@@ -1,0 +1,89 @@
+import type { InstanceDefinition, ProblemDefinition } from '../../src/atlas/definition.ts';
+import type { InstanceResult, PathStats, Solution } from '../../src/atlas/record.ts';
+import type { PolynomialSystem } from '../../src/engine/expr/node.ts';
+import { coordinatesOf, isRealValues } from './coordinates-of.ts';
+import type { EngineReport, EngineServices } from './engine-services.ts';
+import { figureOf } from './figure-of.ts';
+import { pathNotes } from './path-notes.ts';
+import { roundNumbers } from './round-numbers.ts';
+
+/** The inputs of one instance's record entry: what was solved, with which seed and strategy, and the engine's report. */
+export interface InstanceRun {
+  readonly definition: ProblemDefinition;
+  readonly system: PolynomialSystem;
+  readonly instance: InstanceDefinition;
+  readonly seed: number;
+  readonly method: string;
+  readonly parameters: Float64Array;
+  readonly report: EngineReport;
+  readonly where: string;
+}
+
+/**
+ * Certifies the engine's solutions and assembles the instance's record entry, rounded to the record's fixed digits:
+ * values in the definition's coordinates, realness judged on them (|im| ≤ 1e-8·(1+|re|)), certification per
+ * solution, the count ladder (complete only for a generic instance whose certified distinct count equals the
+ * published count), path statistics, notes and the figure. Returns the seconds spent solving and certifying too.
+ */
+export async function assembleInstance(run: InstanceRun, engine: EngineServices): Promise<{ result: InstanceResult; seconds: number }> {
+  const { definition, instance, report, where } = run;
+  const realParameters = run.parameters.every((v, k) => k % 2 === 0 || v === 0);
+  const points = report.solutions.map((s) => s.point);
+  const verdict = await engine.certify(run.system, run.parameters, points, { realParameters });
+  const names = definition.formulation.parameters;
+  const parameters = Object.fromEntries(names.map((n, j) => [n, [run.parameters[2 * j]!, run.parameters[2 * j + 1]!] as [number, number]]));
+  const solutions: Solution[] = report.solutions.map((s, i) => {
+    const values = coordinatesOf(definition, s.point, where);
+    const v = verdict.solutions[i] ?? { certified: false, certifiedReal: false };
+    return {
+      values: pairs(values),
+      residual: s.residual,
+      condition: Number.isFinite(s.condition) && s.condition > 0 ? s.condition : null,
+      multiplicity: s.multiplicity,
+      real: isRealValues(values),
+      certified: v.certified,
+      certifiedReal: v.certifiedReal,
+    };
+  });
+  const rounded = roundNumbers(solutions);
+  const trueCount = definition.trueCount.value;
+  const counts = {
+    bezoutBound: report.bezoutBound,
+    multihomogeneousBound: report.multihomogeneousBound ?? null,
+    trueCount,
+    found: solutions.length,
+    certified: verdict.certified,
+    certifiedDistinct: verdict.certifiedDistinct,
+    real: solutions.filter((s) => s.real).length,
+    certifiedReal: verdict.certifiedReal,
+    complete: instance.kind === 'generic' && trueCount !== null && verdict.certifiedDistinct === trueCount,
+  };
+  const st = report.stats;
+  const paths: PathStats = {
+    tracked: st.tracked, nonsingular: st.regular, singular: st.singular, atInfinity: st.atInfinity, failed: st.failed,
+    failures: { ...st.failures }, stepsMedian: st.stepsMedian, stepsMax: st.stepsMax, retries: st.retries,
+  };
+  const roundedParameters = roundNumbers(parameters);
+  const realSolutions = rounded.flatMap((s, index) => (s.real ? [{ index, values: s.values.map(([re]) => re) }] : []));
+  const result: InstanceResult = {
+    id: instance.id,
+    kind: instance.kind,
+    label: instance.label,
+    description: instance.description,
+    seed: run.seed,
+    method: run.method,
+    parameters: roundedParameters,
+    counts,
+    paths: roundNumbers(paths),
+    solutions: rounded,
+    figure: roundNumbers(figureOf(definition, roundedParameters, realSolutions, where)),
+    notes: pathNotes(counts, paths, instance.kind),
+  };
+  return { result, seconds: report.seconds + verdict.seconds };
+}
+
+function pairs(packed: Float64Array): [number, number][] {
+  const out: [number, number][] = [];
+  for (let k = 0; k < packed.length; k += 2) out.push([packed[k]!, packed[k + 1]!]);
+  return out;
+}

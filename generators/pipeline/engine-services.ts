@@ -1,0 +1,76 @@
+import type { PathEnd } from '../../src/engine/homotopy.ts';
+import type { PolynomialSystem } from '../../src/engine/expr/node.ts';
+
+/** One distinct solution the engine reports (H1's FoundSolution): packed complex point in the unknowns. */
+export interface EngineSolution {
+  readonly point: Float64Array;
+  readonly residual: number;
+  readonly condition: number;
+  readonly multiplicity: number;
+  readonly real: boolean;
+  readonly paths: number;
+}
+
+/** What a solve strategy returns (H1's SolveReport; H6's parameter homotopy returns the same shape). */
+export interface EngineReport {
+  readonly bezoutBound: number;
+  readonly multihomogeneousBound?: number | null;
+  readonly startSystem?: string;
+  readonly ends: readonly PathEnd[];
+  readonly solutions: readonly EngineSolution[];
+  readonly singular: readonly EngineSolution[];
+  readonly stats: {
+    readonly tracked: number;
+    readonly regular: number;
+    readonly singular: number;
+    readonly atInfinity: number;
+    readonly failed: number;
+    readonly failures: Readonly<Record<string, number>>;
+    readonly stepsMedian: number;
+    readonly stepsMax: number;
+    readonly retries: number;
+  };
+  readonly seconds: number;
+}
+
+/** Progress of one solve: paths done out of the total. */
+export interface EngineProgress {
+  readonly done: number;
+  readonly total: number;
+}
+
+/** Options handed to a strategy. `shard` asks for path batch `index` of `count` (0-based) only. */
+export interface StrategyOptions {
+  readonly seed: number;
+  readonly workers?: number;
+  readonly shard?: { readonly index: number; readonly count: number };
+  readonly onProgress?: (progress: EngineProgress) => void;
+}
+
+/** One solve strategy: a label for the record's `method`, and the solve itself. */
+export interface SolveStrategy {
+  readonly label: string;
+  /** Whether the strategy honours `shard` (path batches merged later by `collect`). */
+  readonly shardable: boolean;
+  readonly solve: (system: PolynomialSystem, parameters: Float64Array, options: StrategyOptions, definition: unknown) => Promise<EngineReport>;
+}
+
+/** The certifier's verdict (H5's certifySolutions). */
+export interface CertifyReport {
+  readonly solutions: readonly { readonly certified: boolean; readonly certifiedReal: boolean }[];
+  readonly certified: number;
+  readonly certifiedDistinct: number;
+  readonly certifiedReal: number;
+  readonly seconds: number;
+}
+
+/**
+ * Everything the pipeline needs from the engine, injected so tests can use a small fake and production wires the
+ * real engine (generators/pipeline/real-engine.ts): strategies by SolverChoice kind, certification, shard merging.
+ */
+export interface EngineServices {
+  readonly version: string;
+  readonly strategies: Readonly<Record<string, SolveStrategy>>;
+  readonly certify: (system: PolynomialSystem, parameters: Float64Array, points: Float64Array[], options: { realParameters: boolean }) => Promise<CertifyReport> | CertifyReport;
+  readonly collect: (system: PolynomialSystem, parameters: Float64Array, ends: readonly PathEnd[], bounds: { bezoutBound: number; multihomogeneousBound: number | null }) => Promise<EngineReport> | EngineReport;
+}

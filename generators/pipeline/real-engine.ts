@@ -1,0 +1,30 @@
+import type { EngineServices, SolveStrategy } from './engine-services.ts';
+
+/**
+ * The production engine: strategies keyed by SolverChoice kind, wired to src/engine's solveSystem (start systems
+ * 'total-degree' and 'multihomogeneous'), certifySolutions and collectSolutions. Modules load on first use, so
+ * commands that solve nothing (refresh with nothing stale, check) stay fast.
+ * To add a strategy (parameter homotopy, monodromy), add one entry to `strategies` below.
+ */
+export async function loadEngine(): Promise<EngineServices> {
+  const [{ solveSystem, collectSolutions }, { certifySolutions }, { ENGINE_VERSION }] = await Promise.all([
+    import('../../src/engine/solve/solve-system.ts'),
+    import('../../src/engine/certify/certify-solutions.ts'),
+    import('../../src/engine/version.ts'),
+  ]);
+  const startSystem = (start: 'total-degree' | 'multihomogeneous', label: string): SolveStrategy => ({
+    label,
+    shardable: true,
+    solve: (system, parameters, o) => solveSystem(system, parameters, { seed: o.seed, start, workers: o.workers, shard: o.shard, onProgress: o.onProgress }),
+  });
+  const strategies: Record<string, SolveStrategy> = {
+    'total-degree': startSystem('total-degree', 'total-degree homotopy'),
+    multihomogeneous: startSystem('multihomogeneous', 'multihomogeneous homotopy'),
+  };
+  return {
+    version: ENGINE_VERSION,
+    strategies,
+    certify: (system, parameters, points, options) => certifySolutions(system, parameters, points, options),
+    collect: (system, parameters, ends, bounds) => collectSolutions(system, parameters, ends, bounds),
+  };
+}
