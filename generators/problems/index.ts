@@ -1,7 +1,31 @@
 import type { ProblemDefinition } from '../../src/atlas/definition.ts';
 import circlesTangentToThreeCircles from './circles/circles-tangent-to-three-circles.ts';
+import pointsCommonToTwoConics from './intersections/points-common-to-two-conics.ts';
+import pointsCommonToTwoCubics from './intersections/points-common-to-two-cubics.ts';
+import conicsThrough5Points from './conics/conics-through-5-points.ts';
+import conicsThrough4Points from './conics/conics-through-4-points-tangent-to-1-line.ts';
+import conicsThrough3Points from './conics/conics-through-3-points-tangent-to-2-lines.ts';
+import conicsThrough2Points from './conics/conics-through-2-points-tangent-to-3-lines.ts';
+import conicsThrough1Point from './conics/conics-through-1-point-tangent-to-4-lines.ts';
+import conicsTangentTo5Lines from './conics/conics-tangent-to-5-lines.ts';
+import linesOnACubicSurface from './surfaces/lines-on-a-cubic-surface.ts';
+import linesMeetingFourLines from './schubert/lines-meeting-four-lines.ts';
+import flexesOfAPlaneCubic from './plane-curves/flexes-of-a-plane-cubic.ts';
+import bitangentsOfAPlaneQuartic from './plane-curves/bitangents-of-a-plane-quartic.ts';
 
 /** Every problem of the atlas, in the order the home page lists them. Slugs are permanent. */
 export const problems: readonly ProblemDefinition[] = [
   circlesTangentToThreeCircles,
+  pointsCommonToTwoConics,
+  pointsCommonToTwoCubics,
+  conicsThrough5Points,
+  conicsThrough4Points,
+  conicsThrough3Points,
+  conicsThrough2Points,
+  conicsThrough1Point,
+  conicsTangentTo5Lines,
+  linesOnACubicSurface,
+  linesMeetingFourLines,
+  flexesOfAPlaneCubic,
+  bitangentsOfAPlaneQuartic,
 ];

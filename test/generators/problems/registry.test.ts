@@ -11,6 +11,18 @@ import { degree } from '../../../src/engine/expr/degree.ts';
 // derivations ("[derived]" in REFERENCES.md), recomputed by hand beside each row.
 const expectedBezout: Record<string, number> = {
   'circles-tangent-to-three-circles': 8, // three quadrics in (D, E, F)
+  'points-common-to-two-conics': 4, // 2 · 2
+  'points-common-to-two-cubics': 9, // 3 · 3
+  'conics-through-5-points': 1, // chart and five point conditions, all linear
+  'conics-through-4-points-tangent-to-1-line': 2, // one tangency quadric
+  'conics-through-3-points-tangent-to-2-lines': 4,
+  'conics-through-2-points-tangent-to-3-lines': 8,
+  'conics-through-1-point-tangent-to-4-lines': 16,
+  'conics-tangent-to-5-lines': 32,
+  'lines-on-a-cubic-surface': 81, // four cubics in (a, b, c, d)
+  'lines-meeting-four-lines': 4, // two equations bilinear in (s, t)
+  'flexes-of-a-plane-cubic': 9, // f and its Hessian, both cubics
+  'bitangents-of-a-plane-quartic': 1080, // degrees 5, 6, 6, 6 (REFERENCES.md: 1080)
 };
 
 describe('the problem registry', () => {

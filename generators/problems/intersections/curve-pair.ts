@@ -1,0 +1,74 @@
+import type { ComplexInput, ProblemDefinition } from '../../../src/atlas/definition.ts';
+import type { FigureItem } from '../../../src/atlas/figure.ts';
+import { coefficientNames, monomialExponents } from '../shared/monomials.ts';
+import { polynomial } from '../shared/form.ts';
+import { sampleCurve, type PlaneWindow } from '../shared/contour.ts';
+import { fitWindow } from '../shared/fit-window.ts';
+
+/** What distinguishes one "two plane curves meet" problem from another. */
+export interface CurvePairSpec {
+  readonly slug: string;
+  readonly degree: number;
+  readonly noun: string;
+  readonly demo: { id: string; label: string; description: string; p: readonly number[]; q: readonly number[] };
+  /** The box in which the demo curves are drawn (sampled for degree ≥ 3). */
+  readonly view: PlaneWindow;
+  readonly genericSeed: number;
+}
+
+/** A two-curve intersection problem: Σ pᵢⱼxⁱyʲ = 0 and Σ qᵢⱼxⁱyʲ = 0 of the same degree d meet in d² points. */
+export function curvePairProblem(spec: CurvePairSpec): ProblemDefinition {
+  const { degree: d } = spec;
+  const exponents = monomialExponents(2, d);
+  const pNames = coefficientNames('p', 2, d);
+  const qNames = coefficientNames('q', 2, d);
+  const evaluator = (c: readonly number[]) => (x: number, y: number) => exponents.reduce((s, [i, j], m) => s + c[m]! * x ** i! * y ** j!, 0);
+  const curve = (c: readonly number[], label: string): FigureItem[] =>
+    d === 2
+      ? [{ shape: 'conic', coefficients: c as [number, number, number, number, number, number], layer: 'given', label }]
+      : sampleCurve(evaluator(c), spec.view).map((points) => ({ shape: 'polyline', points, closed: false, layer: 'given', label }));
+  const configuration = (p: Readonly<Record<string, number>>): FigureItem[] => [
+    ...curve(pNames.map((n) => p[n]!), 'first curve'),
+    ...curve(qNames.map((n) => p[n]!), 'second curve'),
+  ];
+  const parameters: Record<string, ComplexInput> = {};
+  pNames.forEach((n, m) => (parameters[n] = spec.demo.p[m]!));
+  qNames.forEach((n, m) => (parameters[n] = spec.demo.q[m]!));
+  return {
+    slug: spec.slug,
+    title: `Points common to two plane ${spec.noun}s`,
+    family: 'intersections',
+    tags: ['Bézout', 'plane curves', 'intersection', spec.noun, 'Bézout bound exact'],
+    statement: `Two general plane ${spec.noun}s, the zero sets of $p(x, y) = \\sum p_{ij} x^i y^j$ and $q(x, y) = \\sum q_{ij} x^i y^j$ with $i + j \\le ${d}$, meet in $${d} \\cdot ${d} = ${d * d}$ points of the complex projective plane (Bézout's theorem). For general coefficients all of them lie in the affine plane.`,
+    formulation: {
+      unknowns: ['x', 'y'],
+      parameters: [...pNames, ...qNames],
+      equations: (u, p, ops) => [
+        polynomial(ops, pNames.map((n) => p[n]!), exponents, [u.x!, u.y!]),
+        polynomial(ops, qNames.map((n) => p[n]!), exponents, [u.x!, u.y!]),
+      ],
+      description: `The affine coordinates $(x, y)$ of a common point; two equations of degree $${d}$, so the Bézout bound is $${d * d}$.`,
+    },
+    trueCount: {
+      value: d * d,
+      source: {
+        kind: 'published',
+        authors: ['W. Fulton'],
+        year: 1969,
+        title: 'Algebraic Curves: An Introduction to Algebraic Geometry',
+        venue: 'W. A. Benjamin, New York',
+        note: "Bézout's theorem for plane curves (stated by Bézout in 1779); bibliographic details from memory.",
+      },
+    },
+    excessNote: `None: for general coefficients the two curves meet transversally in exactly $${d * d}$ finite points, so every path of the total-degree homotopy ends at a distinct solution.`,
+    instances: [
+      { id: 'generic', kind: 'generic', label: `Two random complex ${spec.noun}s`, description: 'Coefficients drawn as random complex numbers from the recorded seed.', seed: spec.genericSeed },
+      { id: spec.demo.id, kind: 'demo', label: spec.demo.label, description: spec.demo.description, seed: 11, parameters },
+    ],
+    drawing: {
+      window: (p, items) => fitWindow([...configuration(p), ...(items ?? [])], 0.05, spec.view),
+      configuration,
+      solution: ([x, y]) => [{ shape: 'point', x: x!, y: y!, layer: 'solution' }],
+    },
+  };
+}

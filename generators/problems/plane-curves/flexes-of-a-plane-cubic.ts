@@ -1,0 +1,67 @@
+import { defineProblem, type ComplexInput } from '../../../src/atlas/definition.ts';
+import type { FigureItem } from '../../../src/atlas/figure.ts';
+import { coefficientNames, monomialExponents } from '../shared/monomials.ts';
+import { hessianOnChart, polynomial } from '../shared/form.ts';
+import { sampleCurve, type PlaneWindow } from '../shared/contour.ts';
+
+const exponents = monomialExponents(2, 3);
+const names = coefficientNames('c', 2, 3);
+const view: PlaneWindow = { xMin: -3.5, xMax: 4.5, yMin: -4.5, yMax: 4.5 };
+
+// Demo: y² − x³ + x + 0.3y³ + 0.2xy, in the order x³, x²y, xy², y³, x², xy, y², x, y, 1.
+const demo = [-1, 0, 0, 0.3, 0, 0.2, 1, 1, 0, 0];
+const demoParameters: Record<string, ComplexInput> = Object.fromEntries(demo.map((c, m) => [names[m]!, c]));
+
+function curve(q: Readonly<Record<string, number>>): FigureItem[] {
+  const f = (x: number, y: number) => exponents.reduce((s, [i, j], m) => s + q[names[m]!]! * x ** i! * y ** j!, 0);
+  return sampleCurve(f, view, 200).map((points) => ({ shape: 'polyline', points, closed: false, layer: 'given', label: 'the cubic' }));
+}
+
+export default defineProblem({
+  slug: 'flexes-of-a-plane-cubic',
+  title: 'The 9 flexes of a plane cubic',
+  family: 'plane-curves',
+  tags: ['plane curves', 'flexes', 'inflection points', 'Hessian', 'Plücker formulas', 'Bézout bound exact'],
+  statement:
+    'Find the flexes (inflection points) of a general plane cubic $f(x, y) = \\sum c_{ij} x^i y^j = 0$ ($i + j \\le 3$): the points where the tangent line meets the curve with multiplicity at least three. A smooth cubic has exactly $9$ flexes, and when it is real exactly $3$ of them are real.',
+  formulation: {
+    unknowns: ['x', 'y'],
+    parameters: names,
+    equations: (u, q, ops) => {
+      const c = names.map((n) => q[n]!);
+      return [polynomial(ops, c, exponents, [u.x!, u.y!]), hessianOnChart(ops, c, exponents, 3, u.x!, u.y!)];
+    },
+    description: [
+      'A flex is a point of the curve where the Hessian $H = \\det\\left(\\partial^2 F / \\partial u\\, \\partial v\\right)$ of the homogenised cubic $F(x, y, z)$ vanishes.',
+      'On the chart $z = 1$ this gives $f = 0$ and $H = 0$, two equations of degree $3$: Bézout bound $9$, attained (Plücker: $3d(d - 2) = 9$ for $d = 3$).',
+    ].join(' '),
+  },
+  trueCount: {
+    value: 9,
+    source: {
+      kind: 'published',
+      authors: ['O. Hesse'],
+      year: 1844,
+      title: 'Über die Wendepunkte der Curven dritter Ordnung',
+      venue: 'Journal für die reine und angewandte Mathematik 28 (1844), 97–107',
+      note: 'The flexes as the intersection with the Hessian curve; the count 3d(d − 2) is one of Plücker’s formulas. That exactly three flexes of a real smooth cubic are real is classical. Venue details from memory.',
+    },
+  },
+  excessNote: 'None: for a general cubic the curve and its Hessian meet transversally in $9$ points, all in the affine chart.',
+  instances: [
+    { id: 'generic', kind: 'generic', label: 'A random complex cubic', description: 'All 10 coefficients drawn as random complex numbers from the recorded seed.', seed: 20260107 },
+    {
+      id: 'toy-railway',
+      kind: 'demo',
+      label: 'A toy railway bend',
+      description: 'A model-railway builder lays track along the cubic $y^2 - x^3 + x + 0.3y^3 + 0.2xy = 0$ and must put a straight transition piece wherever the bend changes direction. Of the $9$ flexes, $3$ are real.',
+      seed: 23,
+      parameters: demoParameters,
+    },
+  ],
+  drawing: {
+    window: () => view,
+    configuration: curve,
+    solution: ([x, y]) => [{ shape: 'point', x: x!, y: y!, layer: 'solution' }],
+  },
+});

@@ -1,0 +1,91 @@
+import { defineProblem, type ComplexInput } from '../../../src/atlas/definition.ts';
+import type { FigureItem } from '../../../src/atlas/figure.ts';
+import { coefficientNames, monomialExponents } from '../shared/monomials.ts';
+import { substitute } from '../shared/univariate.ts';
+import { sampleCurve, type PlaneWindow } from '../shared/contour.ts';
+import { clipLine } from '../shared/segment.ts';
+import { coefficientsOf, linearForm, product, scale, sum } from '../shared/numeric-polynomial.ts';
+
+const exponents = monomialExponents(3, 3);
+const names = coefficientNames('c', 3, 3);
+const view: PlaneWindow = { xMin: -4, xMax: 4, yMin: -4, yMax: 4 };
+
+/**
+ * Demo surface: Clebsch's diagonal surface Σ xᵢ³ = 0, Σ xᵢ = 0 in projective 4-space, all of whose 27 lines are
+ * real, seen through a real projective change of coordinates of our own (rows: coefficients of x, y, z, 1) that
+ * tilts every line away from the horizontal planes z = constant and from the plane at infinity.
+ */
+function demoSurface(): number[] {
+  const rows = [[1, 0.3, -0.2, 0.5], [-0.4, 1, 0.25, -0.3], [0.2, -0.35, 1, 0.4], [0.1, 0.15, -0.3, 1]];
+  const forms = rows.map(([a, b, c, k]) => linearForm([a!, b!, c!], k!));
+  const last = scale(sum(...forms), -1);
+  return coefficientsOf(sum(...[...forms, last].map((f) => product(f, f, f))), exponents);
+}
+
+const demoParameters: Record<string, ComplexInput> = Object.fromEntries(demoSurface().map((c, m) => [names[m]!, c]));
+
+function slice(q: Readonly<Record<string, number>>): FigureItem[] {
+  const f = (x: number, y: number) => exponents.reduce((s, [i, j, k], m) => (k === 0 ? s + q[names[m]!]! * x ** i! * y ** j! : s), 0);
+  return sampleCurve(f, view).map((points) => ({ shape: 'polyline', points, closed: false, layer: 'given', label: 'section by the plane z = 0' }));
+}
+
+export default defineProblem({
+  slug: 'lines-on-a-cubic-surface',
+  title: 'The 27 lines on a cubic surface',
+  family: 'surfaces',
+  tags: ['cubic surface', 'lines', 'Cayley', 'Salmon', 'excess intersection'],
+  statement:
+    'Find every straight line contained in a general cubic surface $f(x, y, z) = \\sum c_{ijk} x^i y^j z^k = 0$ ($i + j + k \\le 3$). A smooth cubic surface contains exactly $27$ lines over the complex numbers; a real one contains $27$, $15$, $7$ or $3$ real lines.',
+  formulation: {
+    unknowns: ['a', 'b', 'c', 'd'],
+    parameters: names,
+    equations: (u, q, ops) => {
+      // The line (x, y, z) = (a + c·s, b + d·s, s) lies on the surface iff f(a + cs, b + ds, s) vanishes identically in s.
+      const inS = substitute(ops, names.map((n) => q[n]!), exponents, [[u.a!, u.c!], [u.b!, u.d!], [null, ops.constant(1)]]);
+      return inS.map((coefficient, k) => {
+        if (!coefficient) throw new Error(`lines-on-a-cubic-surface: the coefficient of s^${k} vanished identically`);
+        return coefficient;
+      });
+    },
+    description: [
+      'A line not parallel to the plane $z = 0$ is $\\{(a + cs,\\ b + ds,\\ s)\\}$, so four numbers $(a, b, c, d)$ chart the lines in space.',
+      'Substituting into $f$ gives a cubic in $s$ whose four coefficients must vanish: four equations of degree $3$ in $(a, b, c, d)$, Bézout bound $3^4 = 81$.',
+    ].join(' '),
+  },
+  trueCount: {
+    value: 27,
+    source: {
+      kind: 'published',
+      authors: ['A. Cayley'],
+      year: 1849,
+      title: 'On the triple tangent planes of surfaces of the third order',
+      venue: 'The Cambridge and Dublin Mathematical Journal 4 (1849), 118–132',
+      note: 'Cayley found that a cubic surface contains finitely many lines and Salmon, in a note in the same volume, that there are 27. The real count 27 for the diagonal surface is due to Clebsch (1871). Page range from memory.',
+    },
+  },
+  excessNote: [
+    'The $81 - 27 = 54$ surplus paths go to infinity. Homogenise the chart with a new coordinate $h$: at $h = 0$ only the cubic part $f_3$ of $f$ survives,',
+    'and the four equations say that $f_3(\\lambda(a, b) + \\mu(c, d), 0)$ vanishes for all $\\lambda, \\mu$. For a general surface that forces $(a, b)$ and $(c, d)$ to be proportional to one of the three roots of the binary cubic $f_3(x, y, 0)$:',
+    'three lines of spurious solutions at infinity, which absorb $54$ of the $81$ intersections. No genuine line is missed, since a general surface has no line parallel to $z = 0$.',
+  ].join(' '),
+  instances: [
+    { id: 'generic', kind: 'generic', label: 'A random complex cubic surface', description: 'All 20 coefficients drawn as random complex numbers from the recorded seed.', seed: 20260106 },
+    {
+      id: 'plaster-model',
+      kind: 'demo',
+      label: 'A plaster model with 27 real lines',
+      description: 'A workshop casts a plaster model of a cubic surface for a mathematics classroom and wants to stretch a thread along every straight line on it. The surface is a tilted copy of the diagonal surface $\\sum x_i^3 = 0$, $\\sum x_i = 0$; all 27 lines are real.',
+      seed: 19,
+      parameters: demoParameters,
+    },
+  ],
+  drawing: {
+    window: () => view,
+    configuration: slice,
+    solution: ([a, b, c, d]) => {
+      const segment = clipLine(a!, b!, c!, d!, view);
+      if (segment) return [{ shape: 'polyline', points: segment, closed: false, layer: 'solution' }];
+      return Math.hypot(c!, d!) < 1e-12 ? [{ shape: 'point', x: a!, y: b!, layer: 'solution' }] : [];
+    },
+  },
+});
