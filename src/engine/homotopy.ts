@@ -15,6 +15,11 @@ export interface Homotopy {
   evaluateValue?(x: Float64Array, tRe: number, tIm: number, h: Float64Array): void;
   /** A linear solver fitted to this homotopy's Jacobian structure (block elimination, say); dense LU if absent. */
   createSolver?(): LinearSolver;
+  /**
+   * Optional: true when x (this homotopy's coordinates, projective charts) lies within relative distance
+   * `tolerance` of the hyperplane at infinity of the target's affine space. Lets the tracker report 'at-infinity'.
+   */
+  atInfinity?(x: Float64Array, tolerance: number): boolean;
 }
 
 /** Factor-then-solve for one n×n complex matrix at a time; buffers are owned by the solver and reused. */

@@ -145,8 +145,9 @@ function factorInPlace(a: Float64Array, perm: Int32Array, n: number): boolean {
       const rowI = 2 * i * n, rowK = 2 * k * n;
       for (let j = k + 1; j < n; j++) {
         const ur = a[rowK + 2 * j]!, ui = a[rowK + 2 * j + 1]!;
-        a[rowI + 2 * j] -= mr * ur - mi * ui;
-        a[rowI + 2 * j + 1] -= mr * ui + mi * ur;
+        const q = rowI + 2 * j;
+        a[q] = a[q]! - (mr * ur - mi * ui);
+        a[q + 1] = a[q + 1]! - (mr * ui + mi * ur);
       }
     }
   }

@@ -30,7 +30,7 @@ export function estimateInverseNorm1(a: FactoredMatrix, n: number): number {
     estimate = norm;
     for (let i = 0; i < n; i++) {
       const m = Math.hypot(y[2 * i]!, y[2 * i + 1]!);
-      if (m > 0) { y[2 * i] /= m; y[2 * i + 1] /= m; } else { y[2 * i] = 1; y[2 * i + 1] = 0; }
+      if (m > 0) { y[2 * i] = y[2 * i]! / m; y[2 * i + 1] = y[2 * i + 1]! / m; } else { y[2 * i] = 1; y[2 * i + 1] = 0; }
     }
     a.solveAdjoint(y, y);
     let j = 0, best = -1;

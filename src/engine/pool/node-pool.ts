@@ -1,0 +1,65 @@
+import { Worker } from 'node:worker_threads';
+import { availableParallelism } from 'node:os';
+import type { PathEnd } from '../homotopy.ts';
+import type { PathJob, TrackingPool } from './job.ts';
+
+/**
+ * The Node backend of the tracking pool: `size` long-lived worker_threads (default availableParallelism()).
+ * Jobs are cut into batches of about total / (4·size) paths (at least 1, at most 256) handed to idle workers
+ * in order; ends are reassembled in start order, so results do not depend on the pool size. Workers are
+ * unref'd while idle, so an idle pool never keeps Node alive; terminate() ends them.
+ */
+export function createNodePool(size = availableParallelism()): TrackingPool {
+  if (!Number.isInteger(size) || size < 1) throw new RangeError(`pool size must be a positive integer, got ${size}`);
+  const workers = Array.from({ length: size }, () => {
+    const w = new Worker(new URL('./worker.ts', import.meta.url));
+    w.unref();
+    return w;
+  });
+  let nextId = 0;
+  let terminated = false;
+  const run = (worker: Worker, job: PathJob): Promise<PathEnd[]> => new Promise((resolve, reject) => {
+    const id = nextId++;
+    const onMessage = (m: { id: number; ends?: PathEnd[]; error?: string }): void => {
+      if (m.id !== id) return;
+      cleanup();
+      if (m.error !== undefined) reject(new Error(`pool worker failed: ${m.error}`));
+      else resolve(m.ends!);
+    };
+    const onError = (e: Error): void => { cleanup(); reject(e); };
+    const cleanup = (): void => { worker.off('message', onMessage); worker.off('error', onError); worker.unref(); };
+    worker.ref();
+    worker.on('message', onMessage);
+    worker.on('error', onError);
+    worker.postMessage({ id, job }, [job.starts.buffer as ArrayBuffer]);
+  });
+  return {
+    size,
+    async track(job, onProgress) {
+      if (terminated) throw new Error('the tracking pool was terminated');
+      const total = job.starts.length;
+      const perPoint = 2 * job.n;
+      if (!(perPoint > 0) || total % perPoint !== 0) throw new RangeError(`pool job: starts length ${total} is not a multiple of 2n = ${perPoint}`);
+      const paths = total / perPoint;
+      const batch = Math.max(1, Math.min(256, Math.ceil(paths / (4 * size))));
+      const results: PathEnd[][] = [];
+      let next = 0, done = 0;
+      const loop = async (worker: Worker): Promise<void> => {
+        while (next < paths) {
+          const k = next, end = Math.min(paths, k + batch);
+          next = end;
+          const starts = job.starts.slice(k * perPoint, end * perPoint);
+          results[k / batch] = await run(worker, { ...job, starts });
+          done += end - k;
+          onProgress?.(done, paths);
+        }
+      };
+      await Promise.all(workers.map(loop));
+      return results.flat();
+    },
+    async terminate() {
+      terminated = true;
+      await Promise.all(workers.map((w) => w.terminate()));
+    },
+  };
+}

@@ -1,0 +1,19 @@
+import type { ExprNode } from '../expr/node.ts';
+import { add, constant, mul, sub, unknown } from '../expr/build.ts';
+
+/**
+ * A start system in multiprojective coordinates X = (x_0 … x_{n−1}, h_0 … h_{G−1}) (h_g homogenises group g):
+ * n equations G_i (without the chart equations) and its `count` solutions, packed complex, each of length 2(n + G),
+ * stored one after another in `starts`, in the path order that every run uses.
+ */
+export interface StartSystem {
+  readonly equations: ExprNode[];
+  readonly count: number;
+  readonly starts: Float64Array;
+}
+
+/** The chart equation Σ_k c_k·X_{coords[k]} − 1 for packed complex coefficients c (length 2·coords.length). */
+export function chartEquation(coords: readonly number[], coefficients: Float64Array): ExprNode {
+  const terms = coords.map((j, k) => mul(constant(coefficients[2 * k]!, coefficients[2 * k + 1]!), unknown(`X${j}`, j)));
+  return sub(add(...terms), 1);
+}

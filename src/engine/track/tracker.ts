@@ -1,0 +1,89 @@
+import type { FailureReason, Homotopy, PathEnd, PathOutcome } from '../homotopy.ts';
+import { allFinite } from '../complex/packed.ts';
+import { createStepper, type SegmentStatus, type Stepper } from './stepper.ts';
+import { createCauchyEndgame } from './cauchy-endgame.ts';
+import { DEFAULT_TRACKER_SETTINGS, stricterSettings, type TrackerSettings } from './settings.ts';
+
+/** Ends closer than this (relative, in the homotopy's projective coordinates) to infinity are 'at-infinity'. */
+export const INFINITY_TOLERANCE = 1e-8;
+/** Attempted steps allowed for the straight final approach before the Cauchy endgame takes over. */
+const APPROACH_ATTEMPTS = 40;
+
+/** A path tracker bound to one homotopy; buffers are made once here and reused for every path. */
+export interface Tracker {
+  readonly stepper: Stepper;
+  readonly settings: TrackerSettings;
+  /**
+   * Tracks one path from `start` (packed complex, length 2n, not modified) at real t = tStart to tEnd and returns
+   * its end in the homotopy's own coordinates. Stages: predictor–corrector to tEnd ∓ endgameStart; a straight
+   * approach to tEnd (≤ 40 attempts, aborted when the condition estimate passes singularCondition); else the
+   * Cauchy endgame. A failed path is re-tracked up to settings.retries times with stricterSettings; steps and
+   * rejections are summed over all attempts. Outcome 'at-infinity' needs homotopy.atInfinity.
+   */
+  track(start: Float64Array, tStart?: number, tEnd?: number): PathEnd;
+}
+
+/** Creates a tracker; `settings` override DEFAULT_TRACKER_SETTINGS field by field. */
+export function createTracker(homotopy: Homotopy, settings: Partial<TrackerSettings> = {}): Tracker {
+  const base: TrackerSettings = { ...DEFAULT_TRACKER_SETTINGS, ...settings };
+  const stepper = createStepper(homotopy, base);
+  const endgame = createCauchyEndgame(stepper);
+  const len = 2 * homotopy.n;
+  const saved = new Float64Array(len);
+
+  function attempt(x: Float64Array, tStart: number, tEnd: number): { status: SegmentStatus; winding: number } {
+    const s = stepper.settings;
+    const span = Math.abs(tEnd - tStart);
+    const u = tStart < tEnd ? -1 : 1;
+    if (s.endgameStart <= 0 || span <= s.endgameStart) {
+      const status = stepper.segment(x, tStart, 0, tEnd, 0);
+      if (status === 'ok') stepper.newton(x, tEnd, 0, s.finalTolerance, 6);
+      return { status, winding: 1 };
+    }
+    const tE = tEnd + u * s.endgameStart;
+    const status = stepper.segment(x, tStart, 0, tE, 0);
+    if (status !== 'ok') return { status, winding: 1 };
+    saved.set(x);
+    const approach = stepper.segment(x, tE, 0, tEnd, 0, s.singularCondition, APPROACH_ATTEMPTS);
+    if (approach === 'ok' && stepper.newton(x, tEnd, 0, s.finalTolerance, 6) && stepper.condition <= s.singularCondition) {
+      return { status: 'ok', winding: 1 };
+    }
+    x.set(saved);
+    const result = endgame(x, tEnd, 0, u, 0, s.endgameStart);
+    if (result.status === 'ok' && result.winding === 1) stepper.newton(x, tEnd, 0, s.finalTolerance, 6);
+    return { status: result.status, winding: result.winding };
+  }
+
+  function track(start: Float64Array, tStart = 0, tEnd = 1): PathEnd {
+    if (start.length !== len) throw new RangeError(`start point has length ${start.length}, expected ${len} (packed complex, n = ${homotopy.n})`);
+    let steps = 0, rejected = 0;
+    for (let k = 0; ; k++) {
+      stepper.settings = k === 0 ? base : stricterSettings(base, k);
+      stepper.steps = 0;
+      stepper.rejected = 0;
+      stepper.stepSize = stepper.settings.maxStep / 4;
+      const x = Float64Array.from(start);
+      const { status, winding } = attempt(x, tStart, tEnd);
+      steps += stepper.steps;
+      rejected += stepper.rejected;
+      const finite = allFinite(x, len);
+      if ((status === 'ok' && finite) || k >= base.retries) {
+        const failure: FailureReason | undefined = !finite ? 'non-finite' : status === 'ok' ? undefined : status === 'ill-conditioned' ? 'no-convergence' : status;
+        return finish(x, tEnd, winding, steps, rejected, k, failure);
+      }
+    }
+  }
+
+  function finish(x: Float64Array, tEnd: number, winding: number, steps: number, rejectedSteps: number, retries: number, failure?: FailureReason): PathEnd {
+    const residual = allFinite(x, len) ? stepper.residual(x, tEnd, 0) : Infinity;
+    const condition = Number.isFinite(residual) ? stepper.condition : Infinity;
+    let outcome: PathOutcome;
+    if (failure !== undefined) outcome = 'failed';
+    else if (homotopy.atInfinity?.(x, INFINITY_TOLERANCE)) outcome = 'at-infinity';
+    else outcome = winding > 1 || !(condition <= base.singularCondition) ? 'singular' : 'regular';
+    const end: PathEnd = { outcome, point: x, residual, condition, windingNumber: winding, steps, rejectedSteps, retries };
+    return failure === undefined ? end : { ...end, failure };
+  }
+
+  return { stepper, settings: base, track };
+}
