@@ -1,6 +1,7 @@
 import { defineProblem } from '../../../src/atlas/definition.ts';
 import type { FigureItem } from '../../../src/atlas/figure.ts';
 import { fitWindow } from '../shared/fit-window.ts';
+import { genericInstance } from '../shared/generic-instance.ts';
 
 const given = [1, 2, 3] as const;
 
@@ -60,7 +61,7 @@ export default defineProblem({
     'Excess appears only in other coordinates: with centre and signed radius the same circle is found twice, and squared distance equations of degree 4 give $64$ paths.',
   ].join(' '),
   instances: [
-    { id: 'generic', kind: 'generic', label: 'Random complex circles', description: 'Centres and radii drawn as random complex numbers from the recorded seed.', seed: 20260101 },
+    genericInstance('Random complex circles', 20260101, 'Centres and radii'),
     {
       id: 'three-ponds',
       kind: 'demo',

@@ -2,6 +2,7 @@ import type { ComplexInput, ProblemDefinition } from '../../../src/atlas/definit
 import type { FigureItem } from '../../../src/atlas/figure.ts';
 import type { ExprNode } from '../../../src/engine/expr/node.ts';
 import { fitWindow } from '../shared/fit-window.ts';
+import { genericInstance } from '../shared/generic-instance.ts';
 import { normalizeByLargest } from '../shared/normalize.ts';
 
 /** The characteristic numbers of conics: through p general points and tangent to 5 − p general lines. */
@@ -123,7 +124,7 @@ export function pointLineProblem(p: number, genericSeed: number, demo: PointLine
               : `The double lines through the ${p === 1 ? 'point form a curve' : 'plane form a surface'} of such spurious solutions; the surplus paths end on it as singular points, or at points of it that lie on the chart's hyperplane at infinity.`,
           ].join(' '),
     instances: [
-      { id: 'generic', kind: 'generic', label: 'Random complex points and lines', description: 'Points and lines with coordinates drawn as random complex numbers from the recorded seed.', seed: genericSeed },
+      genericInstance('Random complex points and lines', genericSeed, 'Point coordinates and line coefficients'),
       { id: demo.id, kind: 'demo', label: demo.label, description: demo.description, seed: 13, parameters },
     ],
     drawing: {

@@ -2,7 +2,9 @@ import type { ComplexInput, ProblemDefinition } from '../../../src/atlas/definit
 import type { FigureItem } from '../../../src/atlas/figure.ts';
 import { coefficientNames, monomialExponents } from '../shared/monomials.ts';
 import { polynomial } from '../shared/form.ts';
-import { sampleCurve, type PlaneWindow } from '../shared/contour.ts';
+import type { PlaneWindow } from '../shared/contour.ts';
+import { planeCurveItems } from '../shared/plane-curve-items.ts';
+import { genericInstance } from '../shared/generic-instance.ts';
 import { fitWindow } from '../shared/fit-window.ts';
 
 /** What distinguishes one "two plane curves meet" problem from another. */
@@ -22,15 +24,11 @@ export function curvePairProblem(spec: CurvePairSpec): ProblemDefinition {
   const exponents = monomialExponents(2, d);
   const pNames = coefficientNames('p', 2, d);
   const qNames = coefficientNames('q', 2, d);
-  const evaluator = (c: readonly number[]) => (x: number, y: number) => exponents.reduce((s, [i, j], m) => s + c[m]! * x ** i! * y ** j!, 0);
-  const curve = (c: readonly number[], label: string): FigureItem[] =>
+  const curve = (p: Readonly<Record<string, number>>, curveNames: readonly string[], label: string): FigureItem[] =>
     d === 2
-      ? [{ shape: 'conic', coefficients: c as [number, number, number, number, number, number], layer: 'given', label }]
-      : sampleCurve(evaluator(c), spec.view).map((points) => ({ shape: 'polyline', points, closed: false, layer: 'given', label }));
-  const configuration = (p: Readonly<Record<string, number>>): FigureItem[] => [
-    ...curve(pNames.map((n) => p[n]!), 'first curve'),
-    ...curve(qNames.map((n) => p[n]!), 'second curve'),
-  ];
+      ? [{ shape: 'conic', coefficients: curveNames.map((n) => p[n]!) as [number, number, number, number, number, number], layer: 'given', label }]
+      : planeCurveItems(p, curveNames, exponents, spec.view, label);
+  const configuration = (p: Readonly<Record<string, number>>): FigureItem[] => [...curve(p, pNames, 'first curve'), ...curve(p, qNames, 'second curve')];
   const parameters: Record<string, ComplexInput> = {};
   pNames.forEach((n, m) => (parameters[n] = spec.demo.p[m]!));
   qNames.forEach((n, m) => (parameters[n] = spec.demo.q[m]!));
@@ -62,7 +60,7 @@ export function curvePairProblem(spec: CurvePairSpec): ProblemDefinition {
     },
     excessNote: `None: for general coefficients the two curves meet transversally in exactly $${d * d}$ finite points, so every path of the total-degree homotopy ends at a distinct solution.`,
     instances: [
-      { id: 'generic', kind: 'generic', label: `Two random complex ${spec.noun}s`, description: 'Coefficients drawn as random complex numbers from the recorded seed.', seed: spec.genericSeed },
+      genericInstance(`Two random complex ${spec.noun}s`, spec.genericSeed, 'All coefficients'),
       { id: spec.demo.id, kind: 'demo', label: spec.demo.label, description: spec.demo.description, seed: 11, parameters },
     ],
     drawing: {

@@ -3,7 +3,9 @@ import type { FigureItem } from '../../../src/atlas/figure.ts';
 import type { ExprNode } from '../../../src/engine/expr/node.ts';
 import { coefficientNames, monomialExponents } from '../shared/monomials.ts';
 import { substitute } from '../shared/univariate.ts';
-import { sampleCurve, type PlaneWindow } from '../shared/contour.ts';
+import type { PlaneWindow } from '../shared/contour.ts';
+import { planeCurveItems } from '../shared/plane-curve-items.ts';
+import { genericInstance } from '../shared/generic-instance.ts';
 import { clipLine } from '../shared/segment.ts';
 import { coefficientsOf, linearForm, product, sum } from '../shared/numeric-polynomial.ts';
 
@@ -26,10 +28,7 @@ function demoQuartic(): number[] {
 
 const demoParameters: Record<string, ComplexInput> = Object.fromEntries(demoQuartic().map((c, m) => [names[m]!, c]));
 
-function curve(q: Readonly<Record<string, number>>): FigureItem[] {
-  const f = (x: number, y: number) => exponents.reduce((s, [i, j], m) => s + q[names[m]!]! * x ** i! * y ** j!, 0);
-  return sampleCurve(f, view, 220).map((points) => ({ shape: 'polyline', points, closed: false, layer: 'given', label: 'the quartic' }));
-}
+const curve = (q: Readonly<Record<string, number>>): FigureItem[] => planeCurveItems(q, names, exponents, view, 'the quartic', 220);
 
 export default defineProblem({
   slug: 'bitangents-of-a-plane-quartic',
@@ -76,7 +75,7 @@ export default defineProblem({
   },
   excessNote: 'PENDING',
   instances: [
-    { id: 'generic', kind: 'generic', label: 'A random complex quartic', description: 'All 15 coefficients drawn as random complex numbers from the recorded seed.', seed: 20260108 },
+    genericInstance('A random complex quartic', 20260108, 'All 15 coefficients'),
     {
       id: 'stained-glass',
       kind: 'demo',

@@ -2,7 +2,9 @@ import { defineProblem, type ComplexInput } from '../../../src/atlas/definition.
 import type { FigureItem } from '../../../src/atlas/figure.ts';
 import { coefficientNames, monomialExponents } from '../shared/monomials.ts';
 import { hessianOnChart, polynomial } from '../shared/form.ts';
-import { sampleCurve, type PlaneWindow } from '../shared/contour.ts';
+import type { PlaneWindow } from '../shared/contour.ts';
+import { planeCurveItems } from '../shared/plane-curve-items.ts';
+import { genericInstance } from '../shared/generic-instance.ts';
 
 const exponents = monomialExponents(2, 3);
 const names = coefficientNames('c', 2, 3);
@@ -12,10 +14,7 @@ const view: PlaneWindow = { xMin: -3.5, xMax: 4.5, yMin: -4.5, yMax: 4.5 };
 const demo = [-1, 0, 0, 0.3, 0, 0.2, 1, 1, 0, 0];
 const demoParameters: Record<string, ComplexInput> = Object.fromEntries(demo.map((c, m) => [names[m]!, c]));
 
-function curve(q: Readonly<Record<string, number>>): FigureItem[] {
-  const f = (x: number, y: number) => exponents.reduce((s, [i, j], m) => s + q[names[m]!]! * x ** i! * y ** j!, 0);
-  return sampleCurve(f, view, 200).map((points) => ({ shape: 'polyline', points, closed: false, layer: 'given', label: 'the cubic' }));
-}
+const curve = (q: Readonly<Record<string, number>>): FigureItem[] => planeCurveItems(q, names, exponents, view, 'the cubic', 200);
 
 export default defineProblem({
   slug: 'flexes-of-a-plane-cubic',
@@ -49,7 +48,7 @@ export default defineProblem({
   },
   excessNote: 'None: for a general cubic the curve and its Hessian meet transversally in $9$ points, all in the affine chart.',
   instances: [
-    { id: 'generic', kind: 'generic', label: 'A random complex cubic', description: 'All 10 coefficients drawn as random complex numbers from the recorded seed.', seed: 20260107 },
+    genericInstance('A random complex cubic', 20260107, 'All 10 coefficients'),
     {
       id: 'toy-railway',
       kind: 'demo',

@@ -1,6 +1,7 @@
 import { defineProblem, type ComplexInput } from '../../../src/atlas/definition.ts';
 import type { FigureItem } from '../../../src/atlas/figure.ts';
 import { fitWindow } from '../shared/fit-window.ts';
+import { genericInstance } from '../shared/generic-instance.ts';
 
 const lines = [1, 2, 3, 4] as const;
 const axes = ['x', 'y', 'z'] as const;
@@ -72,7 +73,7 @@ export default defineProblem({
     'In $\\mathbb{P}^1 \\times \\mathbb{P}^1$ (the two-homogeneous start) they disappear and the bound $2$ is exact.',
   ].join(' '),
   instances: [
-    { id: 'generic', kind: 'generic', label: 'Four random complex lines', description: 'Points and directions drawn as random complex numbers from the recorded seed.', seed: 20260104 },
+    genericInstance('Four random complex lines', 20260104, 'Points and directions'),
     {
       id: 'four-wires',
       kind: 'demo',

@@ -2,7 +2,9 @@ import { defineProblem, type ComplexInput } from '../../../src/atlas/definition.
 import type { FigureItem } from '../../../src/atlas/figure.ts';
 import { coefficientNames, monomialExponents } from '../shared/monomials.ts';
 import { substitute } from '../shared/univariate.ts';
-import { sampleCurve, type PlaneWindow } from '../shared/contour.ts';
+import type { PlaneWindow } from '../shared/contour.ts';
+import { planeCurveItems } from '../shared/plane-curve-items.ts';
+import { genericInstance } from '../shared/generic-instance.ts';
 import { clipLine } from '../shared/segment.ts';
 import { coefficientsOf, linearForm, product, scale, sum } from '../shared/numeric-polynomial.ts';
 
@@ -15,19 +17,18 @@ const view: PlaneWindow = { xMin: -4, xMax: 4, yMin: -4, yMax: 4 };
  * real, seen through a real projective change of coordinates of our own (rows: coefficients of x, y, z, 1) that
  * tilts every line away from the horizontal planes z = constant and from the plane at infinity.
  */
+export const clebschFrame: readonly (readonly number[])[] = [[1, 0.3, -0.2, 0.5], [-0.4, 1, 0.25, -0.3], [0.2, -0.35, 1, 0.4], [0.1, 0.15, -0.3, 1]];
+
 function demoSurface(): number[] {
-  const rows = [[1, 0.3, -0.2, 0.5], [-0.4, 1, 0.25, -0.3], [0.2, -0.35, 1, 0.4], [0.1, 0.15, -0.3, 1]];
-  const forms = rows.map(([a, b, c, k]) => linearForm([a!, b!, c!], k!));
+  const forms = clebschFrame.map(([a, b, c, k]) => linearForm([a!, b!, c!], k!));
   const last = scale(sum(...forms), -1);
   return coefficientsOf(sum(...[...forms, last].map((f) => product(f, f, f))), exponents);
 }
 
 const demoParameters: Record<string, ComplexInput> = Object.fromEntries(demoSurface().map((c, m) => [names[m]!, c]));
 
-function slice(q: Readonly<Record<string, number>>): FigureItem[] {
-  const f = (x: number, y: number) => exponents.reduce((s, [i, j, k], m) => (k === 0 ? s + q[names[m]!]! * x ** i! * y ** j! : s), 0);
-  return sampleCurve(f, view).map((points) => ({ shape: 'polyline', points, closed: false, layer: 'given', label: 'section by the plane z = 0' }));
-}
+/** The section of the surface by the plane z = 0 (the terms without z). */
+const slice = (q: Readonly<Record<string, number>>): FigureItem[] => planeCurveItems(q, names, exponents, view, 'section by the plane z = 0');
 
 export default defineProblem({
   slug: 'lines-on-a-cubic-surface',
@@ -69,7 +70,7 @@ export default defineProblem({
     'three lines of spurious solutions at infinity, which absorb $54$ of the $81$ intersections. No genuine line is missed, since a general surface has no line parallel to $z = 0$.',
   ].join(' '),
   instances: [
-    { id: 'generic', kind: 'generic', label: 'A random complex cubic surface', description: 'All 20 coefficients drawn as random complex numbers from the recorded seed.', seed: 20260106 },
+    genericInstance('A random complex cubic surface', 20260106, 'All 20 coefficients'),
     {
       id: 'plaster-model',
       kind: 'demo',

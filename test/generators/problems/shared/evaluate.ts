@@ -24,3 +24,17 @@ function times(a: C, b: C): C {
 export function real(values: readonly number[]): C[] {
   return values.map((v) => [v, 0]);
 }
+
+/** The largest modulus of the system's equations at complex unknowns and parameters. */
+export function largestResidual(equations: readonly ExprNode[], x: readonly C[], p: readonly C[]): number {
+  return Math.max(...equations.map((e) => Math.hypot(...evaluate(e, x, p))));
+}
+
+/** Parameter values in the formulation's order from a record of real numbers. */
+export function paramsFrom(names: readonly string[], values: Readonly<Record<string, number>>): C[] {
+  return names.map((n) => {
+    const v = values[n];
+    if (v === undefined) throw new Error(`test data lacks parameter ${n}`);
+    return [v, 0];
+  });
+}

@@ -1,0 +1,46 @@
+import { describe, expect, it } from 'vitest';
+import { pointLineProblem, characteristicNumbers, tangencyQuadric } from '../../../../generators/problems/conics/point-line-conditions.ts';
+import * as ops from '../../../../src/engine/expr/build.ts';
+import { systemOf } from '../../../../src/atlas/system-of.ts';
+import { evaluate, largestResidual, paramsFrom, real, type C } from '../shared/evaluate.ts';
+
+const k = Object.fromEntries(['a', 'b', 'c', 'd', 'e', 'f'].map((n, i) => [n, ops.unknown(n, i)]));
+const tangency = (conic: number[], line: [number, number, number]) =>
+  Math.hypot(...evaluate(tangencyQuadric(ops, k, ops.constant(line[0]), ops.constant(line[1]), ops.constant(line[2])), real(conic), []));
+
+describe('conics through points and tangent to lines: the conditions', () => {
+  it('tangency vanishes for a tangent line of a circle and not for a secant', () => {
+    const circle = [1, 0, 1, 0, 0, -4]; // x² + y² = 4
+    const phi = 0.7;
+    expect(tangency(circle, [Math.cos(phi), Math.sin(phi), -2])).toBeLessThan(1e-12);
+    expect(tangency(circle, [Math.cos(phi), Math.sin(phi), -1])).toBeGreaterThan(1);
+  });
+
+  it('tangency vanishes identically on a double line (the excess locus)', () => {
+    const doubled = [1, -2, 1, 2, -2, 1]; // (x − y + 1)²
+    for (const line of [[1, 2, 3], [-0.3, 0.9, 4], [5, 1, -2]] as [number, number, number][]) expect(tangency(doubled, line)).toBeLessThan(1e-12);
+  });
+
+  describe.each([5, 4, 3, 2, 1, 0])('with %i points', (p) => {
+    // Plant a solution: the circle x² + y² = 4 through points on it and tangent to lines touching it.
+    const points = Array.from({ length: p }, (_, i) => [2 * Math.cos(1 + 1.1 * i), 2 * Math.sin(1 + 1.1 * i)] as const);
+    const lines = Array.from({ length: 5 - p }, (_, j) => [Math.cos(0.4 + 1.3 * j), Math.sin(0.4 + 1.3 * j), -2] as const);
+    const definition = pointLineProblem(p, 1, { id: 'planted', label: 'planted', description: 'planted', points, lines });
+    const system = systemOf(definition);
+
+    it(`states the characteristic number ${characteristicNumbers[p]} as its true count`, () => {
+      expect(definition.trueCount.value).toBe(characteristicNumbers[p]);
+    });
+
+    it('is satisfied by the planted circle, scaled into the chart', () => {
+      const circle: C[] = real([1, 0, 1, 0, 0, -4]);
+      // Scale so the chart equation holds: find λ with chart(λ·circle) = 1 by evaluating the chart at the circle.
+      const chartValue = evaluate(system.equations[0]!, circle, []);
+      const h: C = [chartValue[0] + 1, chartValue[1]]; // chart(x) − 1 + 1
+      const n = h[0] ** 2 + h[1] ** 2;
+      const scaled = circle.map(([re]): C => [(re * h[0]) / n, (-re * h[1]) / n]);
+      const params = paramsFrom(system.parameters, definition.instances[1]!.parameters as Record<string, number>);
+      expect(largestResidual(system.equations, scaled, params)).toBeLessThan(1e-12);
+    });
+  });
+});

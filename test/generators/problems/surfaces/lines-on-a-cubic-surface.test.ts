@@ -1,0 +1,46 @@
+import { describe, expect, it } from 'vitest';
+import definition, { clebschFrame } from '../../../../generators/problems/surfaces/lines-on-a-cubic-surface.ts';
+import { systemOf } from '../../../../src/atlas/system-of.ts';
+import { largestResidual, paramsFrom, real } from '../shared/evaluate.ts';
+
+const system = systemOf(definition);
+const demo = definition.instances.find((i) => i.kind === 'demo')!;
+const params = paramsFrom(system.parameters, demo.parameters as Record<string, number>);
+
+/** The five linear forms x₀ … x₄ (x₄ = −Σ) of Clebsch's surface in the demo frame, as rows (x, y, z, 1). */
+const forms = [...clebschFrame, clebschFrame.reduce((s, r) => s.map((v, i) => v - r[i]!), [0, 0, 0, 0])];
+
+/** (a, b, c, d) of the line where the two planes n₁·(x, y, z, 1) = 0 and n₂·(x, y, z, 1) = 0 meet. */
+function lineChart(n1: readonly number[], n2: readonly number[]): number[] {
+  const det = n1[0]! * n2[1]! - n1[1]! * n2[0]!;
+  const a = (-n1[3]! * n2[1]! + n1[1]! * n2[3]!) / det;
+  const b = (-n1[0]! * n2[3]! + n1[3]! * n2[0]!) / det;
+  const dir = [n1[1]! * n2[2]! - n1[2]! * n2[1]!, n1[2]! * n2[0]! - n1[0]! * n2[2]!, n1[0]! * n2[1]! - n1[1]! * n2[0]!];
+  return [a, b, dir[0]! / dir[2]!, dir[1]! / dir[2]!];
+}
+
+// Clebsch's diagonal surface contains the 15 lines xᵢ + xⱼ = xₖ + xₗ = 0 (the fifth coordinate then vanishes);
+// classical (Clebsch 1871, from memory). The other 12 lines are defined over Q(√5) and are left to the solver.
+const rationalLines: [number, number, number, number][] = [];
+for (let m = 0; m < 5; m++) {
+  const rest = [0, 1, 2, 3, 4].filter((i) => i !== m) as [number, number, number, number];
+  for (const [i, j, k, l] of [[rest[0], rest[1], rest[2], rest[3]], [rest[0], rest[2], rest[1], rest[3]], [rest[0], rest[3], rest[1], rest[2]]] as [number, number, number, number][]) rationalLines.push([i, j, k, l]);
+}
+
+describe('lines on a cubic surface: the formulation', () => {
+  it.each(rationalLines)('the demo surface contains the line x%i + x%i = x%i + x%i = 0', (i, j, k, l) => {
+    const plane = (p: number, q: number) => forms[p]!.map((v, t) => v + forms[q]![t]!);
+    const chart = lineChart(plane(i, j), plane(k, l));
+    expect(largestResidual(system.equations, real(chart), params)).toBeLessThan(1e-7);
+  });
+
+  it('a line off the surface does not satisfy the equations', () => {
+    expect(largestResidual(system.equations, real([0.1, 0.2, 0.3, 0.4]), params)).toBeGreaterThan(1e-3);
+  });
+
+  it('draws a line as a segment clipped to the view', () => {
+    const items = definition.drawing!.solution([0, 0, 1, 1], {});
+    expect(items).toHaveLength(1);
+    expect(items[0]!.shape).toBe('polyline');
+  });
+});
