@@ -1,0 +1,58 @@
+import { describe, expect, it } from 'vitest';
+import { figureScene, POINT_RADIUS } from '../../src/plots/figure-scene.ts';
+import type { Figure } from '../../src/atlas/figure.ts';
+import { fixtureRecord } from '../site/fixture-record.ts';
+
+const W = { xMin: -2, xMax: 2, yMin: -1, yMax: 1 };
+
+describe('figureScene', () => {
+  // Apollonius: 8 circles tangent to three general circles (Viète 1600; Drechsler–Sterz 1999), all real in the demo.
+  it('lays out the Apollonius fixture as 3 given and 8 solution circles, each solution numbered', () => {
+    const demo = fixtureRecord('apollonius-circles').instances.find((i) => i.kind === 'demo')!;
+    const scene = figureScene(demo.figure!, 640);
+    const layer = (n: string) => scene.layers.find((l) => l.name === n)!.items;
+    expect(scene.layers.map((l) => l.name)).toEqual(['given', 'solution', 'tangency']);
+    expect(layer('given').filter((i) => i.tag === 'circle')).toHaveLength(3);
+    expect(layer('solution').map((i) => i.solution)).toEqual([0, 1, 2, 3, 4, 5, 6, 7]);
+    expect(layer('tangency')).toHaveLength(24);
+  });
+
+  it('maps circles to screen centre and radius, rounded to 0.01 px', () => {
+    const fig: Figure = { window: W, items: [{ shape: 'circle', cx: 1, cy: 0.5, r: 0.5, layer: 'given' }] };
+    const item = figureScene(fig, 400).layers[0]!.items[0]!;
+    expect(item.attrs).toEqual({ cx: 300, cy: 50, r: 50 });
+  });
+
+  it('draws a point as a small circle of fixed screen radius', () => {
+    const fig: Figure = { window: W, items: [{ shape: 'point', x: 0, y: 0, layer: 'solution', solution: 2 }] };
+    const item = figureScene(fig, 400).layers[0]!.items[0]!;
+    expect(item).toMatchObject({ tag: 'circle', kind: 'point', solution: 2, attrs: { cx: 200, cy: 100, r: POINT_RADIUS } });
+  });
+
+  it('clips a line to the window and keeps an empty path for a line that misses it', () => {
+    const fig: Figure = { window: W, items: [
+      { shape: 'line', a: 0, b: 1, c: 0, layer: 'construction' },
+      { shape: 'line', a: 0, b: 1, c: -5, layer: 'construction' },
+    ] };
+    const [inside, outside] = figureScene(fig, 400).layers[0]!.items;
+    expect(['M0,100L400,100', 'M400,100L0,100']).toContain(inside!.attrs.d);
+    expect(outside!.attrs.d).toBe('');
+  });
+
+  it('draws conics and polylines as paths with 2-decimal coordinates', () => {
+    const fig: Figure = { window: W, items: [
+      { shape: 'conic', coefficients: [1, 0, 4, 0, 0, -1], layer: 'given' },
+      { shape: 'polyline', points: [[-1, 0], [0, 0.5], [1, 0]], closed: false, layer: 'solution' },
+    ] };
+    const [given, sol] = figureScene(fig, 400).layers;
+    expect(String(given!.items[0]!.attrs.d)).toMatch(/^M[\d.]+,[\d.]+(L[\d.]+,[\d.]+)+/);
+    expect(String(given!.items[0]!.attrs.d)).not.toMatch(/\.\d{3}/);
+    expect(sol!.items[0]!.attrs.d).toBe('M100,100L200,50L300,100');
+  });
+
+  it('gives ticks inside the frame', () => {
+    const scene = figureScene({ window: W, items: [] }, 400);
+    expect(scene.xTicks.map((t) => t.value)).toContain(0);
+    for (const t of scene.xTicks) expect(t.at).toBeGreaterThanOrEqual(0);
+  });
+});
