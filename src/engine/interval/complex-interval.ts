@@ -1,4 +1,4 @@
-import { nextDown, nextUp } from './next-float.ts';
+import { widenDown, widenUp } from './outward.ts';
 import { mulHi, mulLo, scaleHi, scaleLo, sqrHi, sqrLo } from './bounds.ts';
 
 /**
@@ -10,18 +10,18 @@ import { mulHi, mulLo, scaleHi, scaleLo, sqrHi, sqrLo } from './bounds.ts';
 
 /** a + b. */
 export function complexAdd(out: Float64Array, o: number, a: Float64Array, ia: number, b: Float64Array, ib: number): void {
-  out[o] = nextDown(a[ia]! + b[ib]!);
-  out[o + 1] = nextUp(a[ia + 1]! + b[ib + 1]!);
-  out[o + 2] = nextDown(a[ia + 2]! + b[ib + 2]!);
-  out[o + 3] = nextUp(a[ia + 3]! + b[ib + 3]!);
+  out[o] = widenDown(a[ia]! + b[ib]!);
+  out[o + 1] = widenUp(a[ia + 1]! + b[ib + 1]!);
+  out[o + 2] = widenDown(a[ia + 2]! + b[ib + 2]!);
+  out[o + 3] = widenUp(a[ia + 3]! + b[ib + 3]!);
 }
 
 /** a − b. */
 export function complexSub(out: Float64Array, o: number, a: Float64Array, ia: number, b: Float64Array, ib: number): void {
-  out[o] = nextDown(a[ia]! - b[ib + 1]!);
-  out[o + 1] = nextUp(a[ia + 1]! - b[ib]!);
-  out[o + 2] = nextDown(a[ia + 2]! - b[ib + 3]!);
-  out[o + 3] = nextUp(a[ia + 3]! - b[ib + 2]!);
+  out[o] = widenDown(a[ia]! - b[ib + 1]!);
+  out[o + 1] = widenUp(a[ia + 1]! - b[ib]!);
+  out[o + 2] = widenDown(a[ia + 2]! - b[ib + 3]!);
+  out[o + 3] = widenUp(a[ia + 3]! - b[ib + 2]!);
 }
 
 /** −a (exact). */
@@ -37,19 +37,19 @@ export function complexNeg(out: Float64Array, o: number, a: Float64Array, ia: nu
 export function complexMul(out: Float64Array, o: number, a: Float64Array, ia: number, b: Float64Array, ib: number): void {
   const a0 = a[ia]!, a1 = a[ia + 1]!, b0 = a[ia + 2]!, b1 = a[ia + 3]!;
   const c0 = b[ib]!, c1 = b[ib + 1]!, d0 = b[ib + 2]!, d1 = b[ib + 3]!;
-  out[o] = nextDown(mulLo(a0, a1, c0, c1) - mulHi(b0, b1, d0, d1));
-  out[o + 1] = nextUp(mulHi(a0, a1, c0, c1) - mulLo(b0, b1, d0, d1));
-  out[o + 2] = nextDown(mulLo(a0, a1, d0, d1) + mulLo(b0, b1, c0, c1));
-  out[o + 3] = nextUp(mulHi(a0, a1, d0, d1) + mulHi(b0, b1, c0, c1));
+  out[o] = widenDown(mulLo(a0, a1, c0, c1) - mulHi(b0, b1, d0, d1));
+  out[o + 1] = widenUp(mulHi(a0, a1, c0, c1) - mulLo(b0, b1, d0, d1));
+  out[o + 2] = widenDown(mulLo(a0, a1, d0, d1) + mulLo(b0, b1, c0, c1));
+  out[o + 3] = widenUp(mulHi(a0, a1, d0, d1) + mulHi(b0, b1, c0, c1));
 }
 
 /** a²: real part A² − B² (squares, not products), imaginary part 2·A·B. */
 export function complexSqr(out: Float64Array, o: number, a: Float64Array, ia: number): void {
   const a0 = a[ia]!, a1 = a[ia + 1]!, b0 = a[ia + 2]!, b1 = a[ia + 3]!;
-  const lo = nextDown(sqrLo(a0, a1) - sqrHi(b0, b1));
-  const hi = nextUp(sqrHi(a0, a1) - sqrLo(b0, b1));
-  const ilo = nextDown(2 * mulLo(a0, a1, b0, b1)); // doubling is exact except at overflow, so widen anyway
-  const ihi = nextUp(2 * mulHi(a0, a1, b0, b1));
+  const lo = widenDown(sqrLo(a0, a1) - sqrHi(b0, b1));
+  const hi = widenUp(sqrHi(a0, a1) - sqrLo(b0, b1));
+  const ilo = widenDown(2 * mulLo(a0, a1, b0, b1)); // doubling is exact except at overflow, so widen anyway
+  const ihi = widenUp(2 * mulHi(a0, a1, b0, b1));
   out[o] = lo;
   out[o + 1] = hi;
   out[o + 2] = ilo;
@@ -59,10 +59,10 @@ export function complexSqr(out: Float64Array, o: number, a: Float64Array, ia: nu
 /** The product of an exact complex double cr + i·ci and a rectangle b. */
 export function complexScale(out: Float64Array, o: number, cr: number, ci: number, b: Float64Array, ib: number): void {
   const c0 = b[ib]!, c1 = b[ib + 1]!, d0 = b[ib + 2]!, d1 = b[ib + 3]!;
-  out[o] = nextDown(scaleLo(cr, c0, c1) - scaleHi(ci, d0, d1));
-  out[o + 1] = nextUp(scaleHi(cr, c0, c1) - scaleLo(ci, d0, d1));
-  out[o + 2] = nextDown(scaleLo(cr, d0, d1) + scaleLo(ci, c0, c1));
-  out[o + 3] = nextUp(scaleHi(cr, d0, d1) + scaleHi(ci, c0, c1));
+  out[o] = widenDown(scaleLo(cr, c0, c1) - scaleHi(ci, d0, d1));
+  out[o + 1] = widenUp(scaleHi(cr, c0, c1) - scaleLo(ci, d0, d1));
+  out[o + 2] = widenDown(scaleLo(cr, d0, d1) + scaleLo(ci, c0, c1));
+  out[o + 3] = widenUp(scaleHi(cr, d0, d1) + scaleHi(ci, c0, c1));
 }
 
 /** True when rectangle a lies in the interior of rectangle b (strict on all four sides; false on NaN). */

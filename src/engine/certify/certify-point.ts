@@ -1,0 +1,131 @@
+import { widenDown, widenUp } from '../interval/outward.ts';
+import type { CertifiableSystem } from './compiled-system.ts';
+import { invertComplex, multiplyComplex } from './complex-inverse.ts';
+import { createKrawczykTester } from './krawczyk.ts';
+
+/** The outcome for one approximate solution, before distinctness is settled. */
+export interface PointCertificate {
+  certified: boolean;
+  certifiedReal: boolean;
+  /** The box proven to hold exactly one solution: [reLo, reHi, imLo, imHi] per unknown (empty when not certified). */
+  box: Float64Array;
+  /** Half-width of the box in every real coordinate (0 when not certified). */
+  radius: number;
+  reason?: string;
+}
+
+/** Certifies single points, and tests a given box (for the hull of overlapping boxes). */
+export interface PointCertifier {
+  point(x: Float64Array, real: boolean): PointCertificate;
+  hull(box: Float64Array): boolean;
+}
+
+/** Tuning that decides how hard to try, never what counts as a proof. */
+export interface PointCertifierOptions {
+  /** Largest box half-width tried, relative to 1 + ‖x‖∞ (default 1e-6): the point must be this close to its solution. */
+  maxRadius?: number;
+  /** ε-inflation attempts per box kind (default 5). */
+  attempts?: number;
+}
+
+const MIN_RADIUS = 2 ** -42; // ≈ 2.3e-13, relative to 1 + ‖x‖∞: well above the rounding noise of F(m)
+
+/**
+ * Certifies one approximate solution: one Newton step (floating point) gives the centre m and Y ≈ J(x)⁻¹; boxes of
+ * half-width r = max(4‖Δx‖∞, 4‖|Y|·|F(m)|‖∞, 2⁻⁴²(1 + ‖x‖∞)) are inflated (r ← max(8r, 2·dev K)) until Krawczyk's test passes or r
+ * exceeds maxRadius·(1 + ‖x‖∞). With a real system (real parameters and constants) a box centred at Re(m), symmetric
+ * about the real subspace, is tried first: a pass proves the solution real.
+ */
+export function createPointCertifier(system: CertifiableSystem, options: PointCertifierOptions = {}): PointCertifier {
+  const n = system.size;
+  const maxRadius = options.maxRadius ?? 1e-6;
+  const attempts = options.attempts ?? 5;
+  const tester = createKrawczykTester(system);
+  const f0 = new Float64Array(2 * n), j0 = new Float64Array(2 * n * n), inverse = new Float64Array(2 * n * n);
+  const step = new Float64Array(2 * n), centre = new Float64Array(2 * n), box = new Float64Array(4 * n);
+  const centreBox = new Float64Array(4 * n), centreValues = new Float64Array(4 * n);
+
+  /** A heuristic for the smallest useful radius: |Y|·|F(m)| with F(m) in interval arithmetic (rounding noise included). */
+  const noiseAt = (): number => {
+    for (let j = 0; j < n; j++) {
+      centreBox[4 * j] = centreBox[4 * j + 1] = centre[2 * j]!;
+      centreBox[4 * j + 2] = centreBox[4 * j + 3] = centre[2 * j + 1]!;
+    }
+    system.intervalValues(centreBox, centreValues);
+    let noise = 0;
+    for (let i = 0; i < n; i++) {
+      let row = 0;
+      for (let k = 0; k < n; k++) {
+        const y = Math.abs(inverse[2 * (i * n + k)]!) + Math.abs(inverse[2 * (i * n + k) + 1]!);
+        const v = 4 * k;
+        row += y * Math.max(Math.abs(centreValues[v]!), Math.abs(centreValues[v + 1]!), Math.abs(centreValues[v + 2]!), Math.abs(centreValues[v + 3]!));
+      }
+      noise = Math.max(noise, row);
+    }
+    return noise;
+  };
+
+  /** Tries boxes around centre (imaginary parts forced to 0 and the box symmetric when real); returns the radius or 0. */
+  const inflate = (real: boolean, start: number, limit: number): number => {
+    let r = start;
+    for (let a = 0; a < attempts && r <= limit; a++) {
+      for (let j = 0; j < n; j++) {
+        const mr = centre[2 * j]!, mi = real ? 0 : centre[2 * j + 1]!;
+        box[4 * j] = widenDown(mr - r); box[4 * j + 1] = widenUp(mr + r);
+        // a real box is exactly symmetric about the real subspace: imaginary part [−r, r]
+        box[4 * j + 2] = real ? -r : widenDown(mi - r); box[4 * j + 3] = real ? r : widenUp(mi + r);
+      }
+      if (real) for (let j = 0; j < n; j++) centre[2 * j + 1] = 0;
+      if (tester.test(box, centre, inverse)) return r;
+      let deviation = 0;
+      const k = tester.enclosure;
+      for (let j = 0; j < n; j++) {
+        const mi = real ? 0 : centre[2 * j + 1]!;
+        deviation = Math.max(deviation, Math.abs(k[4 * j]! - centre[2 * j]!), Math.abs(k[4 * j + 1]! - centre[2 * j]!),
+          Math.abs(k[4 * j + 2]! - mi), Math.abs(k[4 * j + 3]! - mi));
+      }
+      if (!(deviation < Infinity)) return 0; // NaN or overflow: more room will not help
+      r = Math.max(8 * r, 2 * deviation);
+    }
+    return 0;
+  };
+
+  /** Krawczyk's test on the given box (4n) around its midpoint, once, with Y from the midpoint: true proves one zero. */
+  const hull = (given: Float64Array): boolean => {
+    for (let j = 0; j < 2 * n; j++) centre[j] = 0.5 * given[2 * j]! + 0.5 * given[2 * j + 1]!;
+    system.pointJacobian(centre, f0, j0);
+    if (!invertComplex(j0, n, inverse)) return false;
+    return tester.test(given, centre, inverse);
+  };
+
+  const point = (x: Float64Array, real: boolean): PointCertificate => {
+    const fail = (reason: string): PointCertificate => ({ certified: false, certifiedReal: false, box: new Float64Array(0), radius: 0, reason });
+    let size = 0;
+    for (let k = 0; k < 2 * n; k++) size = Math.max(size, Math.abs(x[k]!));
+    if (!(size < Infinity)) return fail('the point has a coordinate that is not finite');
+    const scale = 1 + size;
+    system.pointJacobian(x, f0, j0);
+    if (!invertComplex(j0, n, inverse)) return fail('the Jacobian is singular at the point (zero or non-finite pivot)');
+    multiplyComplex(inverse, f0, n, step);
+    let stepSize = 0;
+    for (let k = 0; k < 2 * n; k++) stepSize = Math.max(stepSize, Math.abs(step[k]!));
+    const limit = maxRadius * scale;
+    if (!(4 * stepSize <= limit)) {
+      return fail(`not close enough to a solution: the Newton step ${stepSize.toExponential(2)} exceeds the bound ${(limit / 4).toExponential(2)}`);
+    }
+    for (let k = 0; k < 2 * n; k++) centre[k] = x[k]! - step[k]!;
+    const noise = noiseAt();
+    const start = Math.max(4 * stepSize, 4 * noise, MIN_RADIUS * scale);
+    let imaginary = 0;
+    for (let j = 0; j < n; j++) imaginary = Math.max(imaginary, Math.abs(centre[2 * j + 1]!));
+    if (real && imaginary <= limit) {
+      const r = inflate(true, Math.max(start, 2 * imaginary), limit);
+      if (r > 0) return { certified: true, certifiedReal: true, box: box.slice(), radius: r };
+    }
+    for (let k = 0; k < 2 * n; k++) centre[k] = x[k]! - step[k]!;
+    const r = inflate(false, start, limit);
+    if (r > 0) return { certified: true, certifiedReal: false, box: box.slice(), radius: r };
+    return fail(`Krawczyk's test failed on every box tried, up to half-width ${limit.toExponential(2)} (near-singular or clustered solution)`);
+  };
+  return { point, hull };
+}

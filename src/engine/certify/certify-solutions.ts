@@ -1,0 +1,89 @@
+import type { PolynomialSystem } from '../expr/node.ts';
+import { compileCertifiableSystem, type CertifiableSystem } from './compiled-system.ts';
+import { createPointCertifier, type PointCertificate, type PointCertifierOptions } from './certify-point.ts';
+import { settleDistinct } from './settle-distinct.ts';
+
+/**
+ * One approximate solution after certification. certified: Krawczyk's test passed on `box`, which therefore holds
+ * exactly one true solution. certifiedReal: the box is symmetric about the real subspace and the system has real
+ * coefficients (real parameters, real constants), so that solution is fixed by complex conjugation: its coordinates
+ * *as given* (in the system's own chart, which may be a random complex one) are real. sameAs: the index of an
+ * earlier solution proven to be the same one (their boxes overlap and the hull passed).
+ */
+export interface CertifiedSolution {
+  certified: boolean;
+  certifiedReal: boolean;
+  /** Interval box, [reLo, reHi, imLo, imHi] per unknown (empty when not certified). */
+  box: Float64Array;
+  radius: number;
+  /** Why not certified, or why not counted as distinct. */
+  reason?: string;
+  sameAs?: number;
+}
+
+/**
+ * Counts: certified = boxes that passed; certifiedDistinct = groups of overlapping certified boxes (disjoint groups
+ * hold different solutions, so this is a proven lower bound on the number of distinct solutions); certifiedReal =
+ * such groups holding a real-certified box. seconds is wall time.
+ */
+export interface CertificationReport {
+  solutions: CertifiedSolution[];
+  certified: number;
+  certifiedDistinct: number;
+  certifiedReal: number;
+  seconds: number;
+}
+
+/** Options: realParameters (default: every parameter has imaginary part exactly 0), and the point certifier's tuning. */
+export interface CertifyOptions extends PointCertifierOptions {
+  realParameters?: boolean;
+}
+
+/** A system compiled once, ready to certify solution sets of many instances. */
+export interface Certifier {
+  readonly system: CertifiableSystem;
+  /** Certifies every point (packed complex approximate solutions) for the given packed complex parameters. */
+  certify(parameters: Float64Array, points: readonly Float64Array[], options?: CertifyOptions): CertificationReport;
+}
+
+/** Decides whether the instance is real; throws naming the parameter when realParameters is claimed but false. */
+export function realInstance(system: CertifiableSystem, parameters: Float64Array, claimed: boolean | undefined): boolean {
+  if (claimed === false) return false;
+  for (let k = 1; k < parameters.length; k += 2) {
+    if (parameters[k] !== 0) {
+      if (claimed) throw new RangeError(`realParameters was set but parameter ${k >> 1} has imaginary part ${parameters[k]}`);
+      return false;
+    }
+  }
+  return system.realConstants;
+}
+
+/** Compiles the system once (throws a RangeError naming the sizes when it is not square). */
+export function prepareCertifier(polynomialSystem: PolynomialSystem): Certifier {
+  const system = compileCertifiableSystem(polynomialSystem);
+  const n = system.size;
+  return {
+    system,
+    certify(parameters, points, options = {}) {
+      const started = performance.now();
+      system.setParameters(parameters);
+      const real = realInstance(system, parameters, options.realParameters);
+      const certifier = createPointCertifier(system, options);
+      const results: PointCertificate[] = points.map((x, i) => {
+        if (x.length !== 2 * n) throw new RangeError(`solution ${i} has ${x.length} numbers, expected ${2 * n} (packed complex)`);
+        return certifier.point(x, real);
+      });
+      return settleDistinct(results, n, certifier.hull, (performance.now() - started) / 1000);
+    },
+  };
+}
+
+/** Certifies approximate solutions of one instance (compiles the system; use prepareCertifier to compile once). */
+export function certifySolutions(
+  system: PolynomialSystem,
+  parameters: Float64Array,
+  points: Float64Array[],
+  options?: CertifyOptions,
+): CertificationReport {
+  return prepareCertifier(system).certify(parameters, points, options);
+}
