@@ -21,7 +21,7 @@ export interface InstanceRun {
 
 /**
  * Certifies the engine's solutions and assembles the instance's record entry, rounded to the record's fixed digits:
- * values in the definition's coordinates, realness judged on them (|im| ≤ 1e-8·(1+|re|)), certification per
+ * values in the definition's coordinates (multiplicity 1: they are nonsingular), realness judged on them (|im| ≤ 1e-8·(1+|re|)), certification per
  * solution, the count ladder (complete only for a generic instance whose certified distinct count equals the
  * published count), path statistics, notes and the figure. Returns the seconds spent solving and certifying too.
  */
@@ -39,7 +39,7 @@ export async function assembleInstance(run: InstanceRun, engine: EngineServices)
       values: pairs(values),
       residual: s.residual,
       condition: Number.isFinite(s.condition) && s.condition > 0 ? s.condition : null,
-      multiplicity: s.multiplicity,
+      multiplicity: 1,
       real: isRealValues(values),
       certified: v.certified,
       certifiedReal: v.certifiedReal,
@@ -77,9 +77,15 @@ export async function assembleInstance(run: InstanceRun, engine: EngineServices)
     paths: roundNumbers(paths),
     solutions: rounded,
     figure: roundNumbers(figureOf(definition, roundedParameters, realSolutions, where)),
-    notes: pathNotes(counts, paths, instance.kind),
+    notes: [...pathNotes(counts, paths, instance.kind), ...sharedEnds(report)],
   };
   return { result, seconds: report.seconds + verdict.seconds };
+}
+
+/** A note when distinct nonsingular solutions were reached by more than one path (a sign of path jumping). */
+function sharedEnds(report: EngineReport): string[] {
+  const shared = report.solutions.filter((s) => s.paths.length > 1).length;
+  return shared > 0 ? [`${shared} nonsingular solution${shared === 1 ? ' was' : 's were'} reached by more than one path (paths may have jumped)`] : [];
 }
 
 function pairs(packed: Float64Array): [number, number][] {

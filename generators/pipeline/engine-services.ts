@@ -8,7 +8,14 @@ export interface EngineSolution {
   readonly condition: number;
   readonly multiplicity: number;
   readonly real: boolean;
-  readonly paths: number;
+  readonly paths: readonly number[];
+}
+
+/** The bounds and start system a report carries (H1's SolveBounds). */
+export interface SolveBounds {
+  readonly bezoutBound: number;
+  readonly multihomogeneousBound: number | null;
+  readonly startSystem: 'total-degree' | 'multihomogeneous';
 }
 
 /** What a solve strategy returns (H1's SolveReport; H6's parameter homotopy returns the same shape). */
@@ -16,6 +23,7 @@ export interface EngineReport {
   readonly bezoutBound: number;
   readonly multihomogeneousBound?: number | null;
   readonly startSystem?: string;
+  /** Per solution, the indices of the paths that ended there. */
   readonly ends: readonly PathEnd[];
   readonly solutions: readonly EngineSolution[];
   readonly singular: readonly EngineSolution[];
@@ -72,5 +80,6 @@ export interface EngineServices {
   readonly version: string;
   readonly strategies: Readonly<Record<string, SolveStrategy>>;
   readonly certify: (system: PolynomialSystem, parameters: Float64Array, points: Float64Array[], options: { realParameters: boolean }) => Promise<CertifyReport> | CertifyReport;
-  readonly collect: (system: PolynomialSystem, parameters: Float64Array, ends: readonly PathEnd[], bounds: { bezoutBound: number; multihomogeneousBound: number | null }) => Promise<EngineReport> | EngineReport;
+  /** Post-processing of path ends (from concatenated shards, in path order) into a report, as a single run does. */
+  readonly collect: (system: PolynomialSystem, parameters: Float64Array, ends: readonly PathEnd[], bounds: SolveBounds) => Promise<EngineReport> | EngineReport;
 }

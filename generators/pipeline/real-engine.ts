@@ -15,7 +15,8 @@ export async function loadEngine(): Promise<EngineServices> {
   const startSystem = (start: 'total-degree' | 'multihomogeneous', label: string): SolveStrategy => ({
     label,
     shardable: true,
-    solve: (system, parameters, o) => solveSystem(system, parameters, { seed: o.seed, start, workers: o.workers, shard: o.shard, onProgress: o.onProgress }),
+    solve: (system, parameters, o) =>
+      solveSystem(system, parameters, { seed: o.seed, start, workers: o.workers, shard: o.shard, onProgress: o.onProgress && ((done, total) => o.onProgress!({ done, total })) }),
   });
   const strategies: Record<string, SolveStrategy> = {
     'total-degree': startSystem('total-degree', 'total-degree homotopy'),
@@ -25,6 +26,6 @@ export async function loadEngine(): Promise<EngineServices> {
     version: ENGINE_VERSION,
     strategies,
     certify: (system, parameters, points, options) => certifySolutions(system, parameters, points, options),
-    collect: (system, parameters, ends, bounds) => collectSolutions(system, parameters, ends, bounds),
+    collect: (system, parameters, ends, bounds) => collectSolutions(system, parameters, ends, { ...bounds }),
   };
 }

@@ -41,6 +41,7 @@ export const partSchema = z.object({
     seed: z.number().int().nonnegative(),
     bezoutBound: z.number().int().positive(),
     multihomogeneousBound: z.number().int().positive().nullable(),
+    startSystem: z.enum(['total-degree', 'multihomogeneous']),
     ends: z.array(endSchema),
   })),
 });
@@ -60,7 +61,7 @@ export async function solveShard(loaded: LoadedDefinition, target: string, engin
     const report = await runEngine(`${displayPath(loaded.file)}: instance "${instance.id}"`, () =>
       strategy.solve(loaded.system, parameters, { seed: instance.seed, workers: options.workers, shard, onProgress }, loaded.definition));
     const ends = report.ends.map((e) => ({ ...e, point: Array.from(e.point, finiteOrNull), residual: finiteOrNull(e.residual), condition: finiteOrNull(e.condition) }));
-    instances.push({ id: instance.id, seed: instance.seed, bezoutBound: report.bezoutBound, multihomogeneousBound: report.multihomogeneousBound ?? null, ends });
+    instances.push({ id: instance.id, seed: instance.seed, bezoutBound: report.bezoutBound, multihomogeneousBound: report.multihomogeneousBound ?? null, startSystem: report.startSystem ?? 'total-degree', ends });
   }
   return { format: 'atlas-solve-part', formatVersion: 1, target, slug: loaded.definition.slug, definitionHash: loaded.hash, engineVersion: engine.version, shard, instances } as unknown as SolvePart;
 }
@@ -88,7 +89,7 @@ export async function mergeParts(loaded: LoadedDefinition, engine: EngineService
     const ends: PathEnd[] = sorted.flatMap((p) => p.instances[j]!.ends.map((e) => ({ ...e, point: Float64Array.from(e.point) })) as PathEnd[]);
     const parameters = instanceParameters(loaded, instance);
     const where = `merge: instance "${instance.id}"`;
-    const bounds = { bezoutBound: head.bezoutBound, multihomogeneousBound: head.multihomogeneousBound };
+    const bounds = { bezoutBound: head.bezoutBound, multihomogeneousBound: head.multihomogeneousBound, startSystem: head.startSystem };
     const report = await runEngine(where, async () => engine.collect(loaded.system, parameters, ends, bounds));
     const run = { definition: loaded.definition, system: loaded.system, instance, seed: head.seed, method: strategy.label, parameters, report, where };
     const done = await runEngine(where, () => assembleInstance(run, engine));
