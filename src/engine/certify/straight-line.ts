@@ -94,7 +94,7 @@ export function lowerSystem(system: PolynomialSystem): StraightLineProgram {
     if (isOne(b)) return { slot: a.slot, neg };
     if (a.slot === b.slot) {
       const slot = emit(`q${a.slot}`, varies[a.slot]!, (out) => ({ op: 'sqr', out, a: a.slot }));
-      return { slot, neg: false };
+      return { slot, neg }; // (−a)·a = −a², (−a)·(−a) = a²
     }
     const [x, y] = a.slot < b.slot ? [a.slot, b.slot] : [b.slot, a.slot];
     // keep a point operand first so the emitters can scale instead of multiplying rectangles
