@@ -1,4 +1,5 @@
-import type { ExprNode } from '../engine/expr/node.ts';
+import type { ExprNode, PolynomialSystem } from '../engine/expr/node.ts';
+import type { ParameterProblem } from '../engine/parameter/solve-by-parameter-homotopy.ts';
 import type * as ExprOps from '../engine/expr/build.ts';
 import type { CountSource } from './source.ts';
 import type { FigureItem } from './figure.ts';
@@ -65,7 +66,15 @@ export interface FormulationDefinition {
  */
 export type SolverChoice =
   | { readonly kind: 'total-degree' }
-  | { readonly kind: 'multihomogeneous' };
+  | { readonly kind: 'multihomogeneous' }
+  | {
+      /** Parameter homotopy from a stored generic solution set (src/engine/parameter/solve-by-parameter-homotopy.ts). */
+      readonly kind: 'parameter-homotopy';
+      /** The published generic count the stored set holds (checked when the set is loaded or rebuilt). */
+      readonly expected: number;
+      /** Loads (or rebuilds by monodromy and caches) the stored set and returns the engine's ParameterProblem for the shown system. */
+      readonly prepare: (shown: PolynomialSystem) => Promise<ParameterProblem>;
+    };
 
 /** A problem of the atlas: everything a generator needs to solve it and a page needs to explain it. */
 export interface ProblemDefinition {
