@@ -6,7 +6,8 @@ import { substitute } from '../shared/univariate.ts';
 import type { PlaneWindow } from '../shared/contour.ts';
 import { planeCurveItems } from '../shared/plane-curve-items.ts';
 import { genericInstance } from '../shared/generic-instance.ts';
-import { clipLine } from '../shared/segment.ts';
+import { normalizeByLargest } from '../shared/normalize.ts';
+import { imageLine, type ComplexMatrix2 } from '../shared/complex-chart.ts';
 import { coefficientsOf, linearForm, product, sum } from '../shared/numeric-polynomial.ts';
 
 const exponents = monomialExponents(2, 4);
@@ -16,7 +17,7 @@ const view: PlaneWindow = { xMin: -3.2, xMax: 3.2, yMin: -3.2, yMax: 3.2 };
 /**
  * Demo quartic in the spirit of Plücker's example: two crossing ellipses E₁, E₂ (semi-axes 2 × 1.1 and 1.2 × 2.1)
  * turned by 0.3 rad about (0.2, −0.1); the curve E₁·E₂ + 0.04 = 0 splits into four ovals near the four lunes
- * where exactly one ellipse is negative. The turn keeps every bitangent away from the vertical.
+ * where exactly one ellipse is negative.
  */
 function demoQuartic(): number[] {
   const [cos, sin] = [Math.cos(0.3), Math.sin(0.3)];
@@ -30,6 +31,26 @@ const demoParameters: Record<string, ComplexInput> = Object.fromEntries(demoQuar
 
 const curve = (q: Readonly<Record<string, number>>): FigureItem[] => planeCurveItems(q, names, exponents, view, 'the quartic', 220);
 
+/** The fixed complex chart of lines: (x, y) = A·(X, Y) with lines Y = mX + k; our own arbitrary non-real numbers. */
+const chart: ComplexMatrix2 = [[1, 0], [0.35, 0.55], [-0.25, 0.45], [1, 0]];
+
+/**
+ * The real points where the real line ux + vy + w = 0 touches the quartic, read off its restriction
+ * q(t) = f(P + tD) = q₄(t² + αt + β)², α = q₃/(2q₄), β = (q₂/q₄ − α²)/2 (no solving); none if they are not real.
+ */
+function contactPoints(q: Readonly<Record<string, number>>, u: number, v: number, w: number): [number, number][] {
+  const n = u * u + v * v;
+  if (!(n > 0)) return [];
+  const [px, py, dx, dy] = [(-w * u) / n, (-w * v) / n, -v, u];
+  const x = linearForm([dx], px), y = linearForm([dy], py);
+  const restricted = sum(...exponents.map(([i, j], m) => product(linearForm([0], q[names[m]!]!), ...Array(i!).fill(x), ...Array(j!).fill(y))));
+  const [q4, q3, q2] = ['4', '3', '2'].map((k) => restricted.get(k) ?? 0) as [number, number, number];
+  if (Math.abs(q4) < 1e-12) return [];
+  const alpha = q3 / (2 * q4), beta = (q2 / q4 - alpha * alpha) / 2, disc = alpha * alpha - 4 * beta;
+  if (disc < 0) return [];
+  return [(-alpha + Math.sqrt(disc)) / 2, (-alpha - Math.sqrt(disc)) / 2].map((t) => [px + t * dx, py + t * dy]);
+}
+
 export default defineProblem({
   slug: 'bitangents-of-a-plane-quartic',
   title: 'The 28 bitangents of a plane quartic',
@@ -42,11 +63,15 @@ export default defineProblem({
     parameters: names,
     groups: [['m', 'k'], ['alpha', 'beta']],
     equations: (u, q, ops) => {
-      // q(x) = f(x, mx + k) = Σ q_i x^i must equal q₄·(x² + αx + β)²: the line touches the curve where x² + αx + β = 0.
-      const inX = substitute(ops, names.map((n) => q[n]!), exponents, [[null, ops.constant(1)], [u.k!, u.m!]]);
-      const [q0, q1, q2, q3, q4] = inX.map((c, i) => {
-        if (!c) throw new Error(`bitangents-of-a-plane-quartic: the coefficient of x^${i} vanished identically`);
-        return c;
+      // On the line, (x, y) = A·(t, mt + k); q(t) = f(x, y) = Σ q_i t^i must equal q₄·(t² + αt + β)².
+      const c = (z: readonly [number, number]) => ops.constant(z[0], z[1]);
+      const [a11, a12, a21, a22] = chart;
+      const x = [ops.mul(c(a12), u.k!), ops.add(c(a11), ops.mul(c(a12), u.m!))];
+      const y = [ops.mul(c(a22), u.k!), ops.add(c(a21), ops.mul(c(a22), u.m!))];
+      const inT = substitute(ops, names.map((n) => q[n]!), exponents, [x, y]);
+      const [q0, q1, q2, q3, q4] = inT.map((coefficient, i) => {
+        if (!coefficient) throw new Error(`bitangents-of-a-plane-quartic: the coefficient of t^${i} vanished identically`);
+        return coefficient;
       }) as [ExprNode, ExprNode, ExprNode, ExprNode, ExprNode];
       const a = u.alpha!, b = u.beta!;
       return [
@@ -57,10 +82,16 @@ export default defineProblem({
       ];
     },
     description: [
-      'A non-vertical line $y = mx + k$ is a bitangent when $q(x) = f(x, mx + k)$ is a constant times a square, $q(x) = q_4(m)\\,(x^2 + \\alpha x + \\beta)^2$;',
-      'the roots of $x^2 + \\alpha x + \\beta$ are the two points of contact. Comparing the coefficients of $x^3, x^2, x, 1$ gives four equations of degrees $5, 6, 6, 6$ in $(m, k, \\alpha, \\beta)$:',
-      'Bézout bound $1080$; with the groups $\\{m, k\\}$ and $\\{\\alpha, \\beta\\}$ (degrees $(4, 1), (4, 2), (4, 2), (4, 2)$) the two-homogeneous bound is $288$.',
+      'Lines are charted as $Y = mX + k$ in complex coordinates $(X, Y)$ with $(x, y) = A\\,(X, Y)$ for a fixed complex matrix $A$ of our own, so that no real line is at infinity of the chart.',
+      'The line is a bitangent when $q(t) = f(A\\,(t,\\ mt + k))$ is a constant times a square, $q(t) = q_4(m)\\,(t^2 + \\alpha t + \\beta)^2$, the roots of $t^2 + \\alpha t + \\beta$ marking the two points of contact.',
+      'Comparing the coefficients of $t^3, t^2, t, 1$ gives four equations of degrees $5, 6, 6, 6$ in $(m, k, \\alpha, \\beta)$: Bézout bound $1080$;',
+      'with the groups $\\{m, k\\}$ and $\\{\\alpha, \\beta\\}$ (degrees $(4, 1), (4, 2), (4, 2), (4, 2)$) the two-homogeneous bound is $288$, which the solver uses.',
+      'Solutions are stored as the line $ux + vy + w = 0$, scaled so that its largest coefficient is $1$.',
     ].join(' '),
+    coordinates: {
+      names: ['u', 'v', 'w'],
+      map: (x) => normalizeByLargest(imageLine(chart, [x[0]!, x[1]!], [x[2]!, x[3]!])),
+    },
   },
   trueCount: {
     value: 28,
@@ -85,16 +116,13 @@ export default defineProblem({
       parameters: demoParameters,
     },
   ],
+  solver: { kind: 'multihomogeneous' },
   drawing: {
     window: () => view,
     configuration: curve,
-    solution: ([m, k, alpha, beta]) => {
-      const items: FigureItem[] = [];
-      const segment = clipLine(0, k!, 1, m!, view);
-      if (segment) items.push({ shape: 'polyline', points: segment, closed: false, layer: 'solution' });
-      const disc = alpha! * alpha! - 4 * beta!;
-      if (disc >= 0) for (const x of [(-alpha! + Math.sqrt(disc)) / 2, (-alpha! - Math.sqrt(disc)) / 2]) items.push({ shape: 'point', x, y: m! * x + k!, layer: 'tangency' });
-      return items;
-    },
+    solution: ([u, v, w], q) => [
+      { shape: 'line', a: u!, b: v!, c: w!, layer: 'solution' },
+      ...contactPoints(q, u!, v!, w!).map(([x, y]): FigureItem => ({ shape: 'point', x, y, layer: 'tangency' })),
+    ],
   },
 });

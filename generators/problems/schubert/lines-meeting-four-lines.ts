@@ -42,16 +42,17 @@ export default defineProblem({
     equations: (u, q, ops) => {
       const P = axes.map((a) => ops.add(q[`p${a}1`]!, ops.mul(u.s!, q[`d${a}1`]!)));
       const Q = axes.map((a) => ops.add(q[`p${a}2`]!, ops.mul(u.t!, q[`d${a}2`]!)));
-      // The line PQ meets L_k iff Q − P, p_k − P and d_k are linearly dependent.
+      // The line PQ meets L_k iff Q − P, p_k − P and d_k are linearly dependent; writing Q − P = (Q − p_k) + (p_k − P)
+      // drops a vanishing determinant and leaves each row in one unknown only, so the bidegree (1, 1) is visible.
       return [3, 4].map((k) => ops.det([
-        axes.map((_, m) => ops.sub(Q[m]!, P[m]!)),
+        axes.map((a, m) => ops.sub(Q[m]!, q[`p${a}${k}`]!)),
         axes.map((a, m) => ops.sub(q[`p${a}${k}`]!, P[m]!)),
         axes.map((a) => q[`d${a}${k}`]!),
       ]));
     },
     description: [
       'A transversal is determined by where it crosses $L_1$ and $L_2$: the points $P = p_1 + s\\,d_1$ and $Q = p_2 + t\\,d_2$.',
-      'It meets $L_k$ ($k = 3, 4$) when $\\det(Q - P,\\ p_k - P,\\ d_k) = 0$, an equation of degree one in $s$ and one in $t$.',
+      'It meets $L_k$ ($k = 3, 4$) when $\\det(Q - P,\\ p_k - P,\\ d_k) = \\det(Q - p_k,\\ p_k - P,\\ d_k) = 0$, an equation of degree one in $s$ and one in $t$.',
       'We chose these coordinates over a chart of the Grassmannian of lines (four quadrics, Bézout bound $16$) because they keep the geometry visible and the count nearly sharp:',
       'total degree $2 \\cdot 2 = 4$, and with the groups $\\{s\\}, \\{t\\}$ the two-homogeneous bound is exactly $2$.',
     ].join(' '),

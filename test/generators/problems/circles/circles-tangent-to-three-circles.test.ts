@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import definition from '../../../../generators/problems/circles/circles-tangent-to-three-circles.ts';
 import { systemOf } from '../../../../src/atlas/system-of.ts';
 import { evaluate, real } from '../shared/evaluate.ts';
+import { demoInstance, randomInstance, seeds, solveInstance } from '../shared/solve.ts';
 
 const demo = definition.instances.find((i) => i.id === 'three-ponds')!;
 const p = demo.parameters as Record<string, number>;
@@ -68,5 +69,22 @@ describe('circles tangent to three circles (Apollonius)', () => {
       expect(c.y - c.R).toBeGreaterThanOrEqual(w.yMin);
       expect(c.y + c.R).toBeLessThanOrEqual(w.yMax);
     }
+  });
+});
+
+// Apollonius' problem: 8 circles tangent to three general circles (Viète 1600; Drechsler–Sterz,
+// Acta Math. Univ. Comenianae 68 (1999), 2^(n+1) in n-space).
+describe('solving circles tangent to three circles', () => {
+  it.each(seeds(20))('random complex instance %i: 8 tangent circles, every path regular, none failed', async (seed) => {
+    const { report } = await solveInstance(definition, randomInstance(seed));
+    expect(report.bezoutBound).toBe(8);
+    expect(report.solutions).toHaveLength(8);
+    expect(report.stats).toMatchObject({ tracked: 8, regular: 8, singular: 0, atInfinity: 0, failed: 0 });
+  });
+
+  it('the three ponds: 8 tangent circles found, all 8 real', async () => {
+    const { report, real } = await solveInstance(definition, demoInstance(definition, 'three-ponds'));
+    expect(report.solutions).toHaveLength(8);
+    expect(real).toBe(8);
   });
 });

@@ -1,0 +1,38 @@
+import type { InstanceDefinition, ProblemDefinition } from '../../../../src/atlas/definition.ts';
+import { systemOf } from '../../../../src/atlas/system-of.ts';
+import { parametersOf } from '../../../../src/atlas/parameters-of.ts';
+import { solveSystem, type SolveReport } from '../../../../src/engine/solve/solve-system.ts';
+import { coordinatesOf, isRealValues } from '../../../../generators/pipeline/coordinates-of.ts';
+
+/** A solve of one instance with the problem's own start system, and the real count judged in its coordinates. */
+export interface SolvedInstance {
+  readonly report: SolveReport;
+  readonly real: number;
+}
+
+/** Solves an instance (path seed = instance seed) with the definition's solver choice, or the given start system. */
+export async function solveInstance(definition: ProblemDefinition, instance: InstanceDefinition, start?: 'total-degree' | 'multihomogeneous'): Promise<SolvedInstance> {
+  const report = await solveSystem(systemOf(definition), parametersOf(definition, instance), {
+    seed: instance.seed,
+    start: start ?? definition.solver?.kind ?? 'total-degree',
+  });
+  const real = report.solutions.filter((s) => isRealValues(coordinatesOf(definition, s.point, definition.slug))).length;
+  return { report, real };
+}
+
+/** A random complex instance of the problem drawn from `seed`. */
+export function randomInstance(seed: number): InstanceDefinition {
+  return { id: `random-${seed}`, kind: 'generic', label: 'random', description: 'random complex parameters', seed };
+}
+
+/** The seeds 1 … n, for it.each tables over random instances. */
+export function seeds(n: number): number[] {
+  return Array.from({ length: n }, (_, i) => i + 1);
+}
+
+/** The demo instance with the given id (throws when absent, naming the problem). */
+export function demoInstance(definition: ProblemDefinition, id: string): InstanceDefinition {
+  const instance = definition.instances.find((i) => i.id === id);
+  if (!instance) throw new Error(`${definition.slug}: no instance "${id}"`);
+  return instance;
+}
