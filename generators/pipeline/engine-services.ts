@@ -1,5 +1,6 @@
 import type { PathEnd } from '../../src/engine/homotopy.ts';
 import type { PolynomialSystem } from '../../src/engine/expr/node.ts';
+import type { ProblemDefinition } from '../../src/atlas/definition.ts';
 
 /** One distinct solution the engine reports (H1's FoundSolution): packed complex point in the unknowns. */
 export interface EngineSolution {
@@ -60,7 +61,7 @@ export interface SolveStrategy {
   readonly label: string;
   /** Whether the strategy honours `shard` (path batches merged later by `collect`). */
   readonly shardable: boolean;
-  readonly solve: (system: PolynomialSystem, parameters: Float64Array, options: StrategyOptions, definition: unknown) => Promise<EngineReport>;
+  readonly solve: (system: PolynomialSystem, parameters: Float64Array, options: StrategyOptions, definition: ProblemDefinition) => Promise<EngineReport>;
 }
 
 /** The certifier's verdict (H5's certifySolutions). */

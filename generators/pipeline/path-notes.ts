@@ -17,7 +17,7 @@ export function pathNotes(counts: Counts, paths: PathStats, kind: 'generic' | 'd
   }
   if (paths.atInfinity > 0) notes.push(`${plural(paths.atInfinity, 'path')} went to infinity`);
   if (paths.singular > 0) notes.push(`${plural(paths.singular, 'path')} ended at singular points (not counted as found)`);
-  if (paths.retries > 0) notes.push(`${plural(paths.retries, 'path')} retried with stricter settings`);
+  if (paths.retries > 0) notes.push(`${plural(paths.retries, "re-track")} with stricter settings`);
   if (counts.certified < counts.found) notes.push(`${counts.found - counts.certified} of ${counts.found} solutions not certified`);
   return notes;
 }

@@ -1,4 +1,5 @@
 import type { EngineServices, SolveStrategy } from './engine-services.ts';
+import { AtlasError } from './atlas-error.ts';
 
 /**
  * The production engine: strategies keyed by SolverChoice kind, wired to src/engine's solveSystem (start systems
@@ -7,10 +8,11 @@ import type { EngineServices, SolveStrategy } from './engine-services.ts';
  * To add a strategy (parameter homotopy, monodromy), add one entry to `strategies` below.
  */
 export async function loadEngine(): Promise<EngineServices> {
-  const [{ solveSystem, collectSolutions }, { certifySolutions }, { ENGINE_VERSION }] = await Promise.all([
+  const [{ solveSystem, collectSolutions }, { certifySolutions }, { ENGINE_VERSION }, { solveByParameterHomotopy }] = await Promise.all([
     import('../../src/engine/solve/solve-system.ts'),
     import('../../src/engine/certify/certify-solutions.ts'),
     import('../../src/engine/version.ts'),
+    import('../../src/engine/parameter/solve-by-parameter-homotopy.ts'),
   ]);
   const startSystem = (start: 'total-degree' | 'multihomogeneous', label: string): SolveStrategy => ({
     label,
@@ -21,6 +23,15 @@ export async function loadEngine(): Promise<EngineServices> {
   const strategies: Record<string, SolveStrategy> = {
     'total-degree': startSystem('total-degree', 'total-degree homotopy'),
     multihomogeneous: startSystem('multihomogeneous', 'multihomogeneous homotopy'),
+    'parameter-homotopy': {
+      label: 'parameter homotopy from a stored generic solution set',
+      shardable: false,
+      solve: async (system, parameters, o, definition) => {
+        const choice = definition.solver;
+        if (choice?.kind !== 'parameter-homotopy') throw new AtlasError('input', `solver.kind: expected "parameter-homotopy"`);
+        return solveByParameterHomotopy(await choice.prepare(system), parameters, { seed: o.seed });
+      },
+    },
   };
   return {
     version: ENGINE_VERSION,
