@@ -14,7 +14,7 @@ export interface SolvedInstance {
 export async function solveInstance(definition: ProblemDefinition, instance: InstanceDefinition, start?: 'total-degree' | 'multihomogeneous'): Promise<SolvedInstance> {
   const report = await solveSystem(systemOf(definition), parametersOf(definition, instance), {
     seed: instance.seed,
-    start: start ?? definition.solver?.kind ?? 'total-degree',
+    start: start ?? (definition.solver?.kind === 'multihomogeneous' ? 'multihomogeneous' : 'total-degree'),
   });
   const real = report.solutions.filter((s) => isRealValues(coordinatesOf(definition, s.point, definition.slug))).length;
   return { report, real };
