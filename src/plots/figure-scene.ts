@@ -14,7 +14,7 @@ export interface SceneItem {
   readonly attrs: Readonly<Record<string, string | number>>;
 }
 
-/** The figure as layers of screen items (layers in order of first appearance), with grid ticks for the frame. */
+/** The figure as layers of screen items (layers in order of first appearance), with grid ticks at least 12 px inside the frame. */
 export interface Scene {
   readonly width: number;
   readonly height: number;
@@ -24,7 +24,7 @@ export interface Scene {
 }
 
 /** Radius in px of a drawn point. */
-export const POINT_RADIUS = 3.5;
+export const POINT_RADIUS = 4.5;
 
 const round2 = (v: number) => Math.round(v * 100) / 100;
 const pathOf = d3line<Point>().digits(2);
@@ -71,7 +71,7 @@ export function figureScene(figure: Figure, width = 640): Scene {
     width,
     height,
     layers: [...layers].map(([name, items]) => ({ name, items })),
-    xTicks: x.ticks(6).map((v) => ({ at: round2(x(v)), value: v })),
-    yTicks: y.ticks(6).map((v) => ({ at: round2(y(v)), value: v })),
+    xTicks: x.ticks(6).map((v) => ({ at: round2(x(v)), value: v })).filter((t) => t.at > 12 && t.at < width - 12),
+    yTicks: y.ticks(6).map((v) => ({ at: round2(y(v)), value: v })).filter((t) => t.at > 12 && t.at < height - 12),
   };
 }

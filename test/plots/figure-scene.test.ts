@@ -50,9 +50,11 @@ describe('figureScene', () => {
     expect(sol!.items[0]!.attrs.d).toBe('M100,100L200,50L300,100');
   });
 
-  it('gives ticks inside the frame', () => {
+  it('gives ticks at least 12 px inside the frame, so their labels are not cut', () => {
     const scene = figureScene({ window: W, items: [] }, 400);
     expect(scene.xTicks.map((t) => t.value)).toContain(0);
-    for (const t of scene.xTicks) expect(t.at).toBeGreaterThanOrEqual(0);
+    expect(scene.xTicks.map((t) => t.value)).not.toContain(-2);
+    for (const t of scene.xTicks) expect(t.at > 12 && t.at < 388).toBe(true);
+    for (const t of scene.yTicks) expect(t.at > 12 && t.at < 188).toBe(true);
   });
 });
