@@ -4,12 +4,12 @@ import { contentRoot } from '../write/content-paths.ts';
 import { publish, writePage } from '../write/publish.ts';
 import type { CommandContext } from './context.ts';
 import { eachProblem } from './each-problem.ts';
-import { parseOptions } from './parse-options.ts';
+import { integerOption, parseOptions } from './parse-options.ts';
 import { reportPublished } from './report-publish.ts';
 import { solveWithProgress } from './run-solve.ts';
 import { staleness } from './staleness.ts';
 
-const USAGE = 'refresh [--content DIR]';
+const USAGE = 'refresh [--workers N] [--content DIR]';
 
 /**
  * `refresh` (run by `npm start`): re-solves only stale problems of the registry (no record, unreadable record,
@@ -17,7 +17,8 @@ const USAGE = 'refresh [--content DIR]';
  * Loads the engine only when something is stale, so it is quick when nothing is.
  */
 export async function refreshCommand(args: readonly string[], ctx: CommandContext): Promise<number> {
-  const { values } = parseOptions(args, {}, USAGE);
+  const { values } = parseOptions(args, { workers: { type: 'string' } }, USAGE);
+  const workers = integerOption(values.workers, 'workers', 1);
   const root = contentRoot(values.content);
   const version = await ctx.engineVersion();
   const all = await loadRegistry(ctx.problemsDir);
@@ -31,7 +32,7 @@ export async function refreshCommand(args: readonly string[], ctx: CommandContex
     }
     ctx.stderr.write(`${loaded.definition.slug}: stale (${state.reason}); solving\n`);
     engine ??= await ctx.loadEngine();
-    const result = await solveWithProgress(ctx, engine, loaded, {});
+    const result = await solveWithProgress(ctx, engine, loaded, { workers });
     solved++;
     return reportPublished(ctx, loaded.definition.slug, publish(root, result.record));
   });

@@ -22,7 +22,7 @@ export const HELP = `usage: node --experimental-strip-types generators/cli.ts <c
         [--shard k/n --out part.json]       solve one problem; print a summary (--json: one JSON object)
   regenerate [<slug | path>… | --all] [--force] [--workers N]
                                             solve and write records and pages (never worse unless --force)
-  refresh                                   regenerate only stale problems (npm start runs this)
+  refresh [--workers N]                     regenerate only stale problems (npm start runs this)
   check                                     validate every content file and every definition
   merge <part.json>… [--json] [--force]     merge shard parts into one record and write it
 

@@ -1,7 +1,7 @@
 import { mkdirSync, mkdtempSync, readFileSync, readdirSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { describe, expect, it } from 'vitest';
+import { describe, it } from 'vitest';
 import { TWO_CONICS } from '../pipeline/fixtures/solved-fixture.ts';
 import { runCli } from './run-cli.ts';
 
@@ -26,8 +26,8 @@ const cases: [string, string, RegExp][] = [
   ['a default export that is missing', edited('export default {', 'export const problem = {'), /: default export: missing/],
 ];
 
-describe.each(cases)('regenerating a definition file with %s', (_name, source, message) => {
-  it('exits 2 with an error naming the file and the field, no stack trace, and leaves content/ untouched', async () => {
+describe('regenerating a malformed definition file', () => {
+  it.concurrent.for(cases)('with %s exits 2 naming the file and the field, with no stack trace, and leaves content/ untouched', async ([, source, message], { expect }) => {
     const dir = mkdtempSync(join(tmpdir(), 'atlas-bad-'));
     const file = join(dir, 'bad-definition.ts');
     writeFileSync(file, source);

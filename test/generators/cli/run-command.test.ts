@@ -1,4 +1,4 @@
-import { copyFileSync, mkdirSync, mkdtempSync, readFileSync, writeFileSync, appendFileSync } from 'node:fs';
+import { copyFileSync, existsSync, mkdirSync, mkdtempSync, readFileSync, writeFileSync, appendFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
@@ -56,6 +56,19 @@ describe('regenerate', () => {
     const forced = fakeContext({ problemsDir: w.problems, engine: () => fakeEngine({ lose: 2, version: 'fake-2' }) });
     expect(await runCommand(['regenerate', 'two-test-conics', '--force', '--content', w.content], forced.ctx)).toBe(0);
     expect(JSON.parse(readFileSync(recordPath(w.content, 'two-test-conics'), 'utf8')).history).toHaveLength(1);
+  });
+});
+
+describe('solve', () => {
+  it('writes nothing without --write, and publishes through the guard with it', async () => {
+    const w = workspace();
+    const dry = fakeContext();
+    expect(await runCommand(['solve', w.definition, '--json', '--content', w.content], dry.ctx)).toBe(0);
+    expect(existsSync(w.content)).toBe(false);
+    const wet = fakeContext();
+    expect(await runCommand(['solve', w.definition, '--write', '--content', w.content], wet.ctx)).toBe(0);
+    expect(wet.stderr.text).toMatch(/two-test-conics: record and page written/);
+    expect(existsSync(recordPath(w.content, 'two-test-conics'))).toBe(true);
   });
 });
 

@@ -2,7 +2,7 @@ import { spawn } from 'node:child_process';
 import { mkdtempSync, readFileSync, readdirSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { describe, expect, it } from 'vitest';
+import { describe, it } from 'vitest';
 import { parseRecord } from '../../../src/atlas/read-record.ts';
 import { pageFrontmatterSchema } from '../../../src/atlas/page-frontmatter.ts';
 import { readFrontmatter } from '../../../generators/write/render-page.ts';
@@ -21,8 +21,8 @@ function killMidWrite(root: string, delayMs: number): Promise<void> {
   });
 }
 
-describe.each([40, 110, 230])('a regeneration killed with SIGKILL %i ms into a stream of writes', (delayMs) => {
-  it('leaves the record readable and schema-valid and the page with valid frontmatter', async () => {
+describe('a regeneration killed with SIGKILL in the middle of a stream of writes', () => {
+  it.concurrent.for([40, 110, 230])('%i ms in, leaves the record readable and schema-valid and the page with valid frontmatter', async (delayMs, { expect }) => {
     const root = mkdtempSync(join(tmpdir(), 'atlas-kill-'));
     await killMidWrite(root, delayMs);
     const record = parseRecord(readFileSync(recordPath(root, 'two-test-conics'), 'utf8'));
