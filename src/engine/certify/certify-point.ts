@@ -28,12 +28,12 @@ export interface PointCertifierOptions {
   attempts?: number;
 }
 
-const MIN_RADIUS = 2 ** -42; // ≈ 2.3e-13, relative to 1 + ‖x‖∞: well above the rounding noise of F(m)
+const FLOOR = 2 ** -44; // ≈ 5.7e-14, relative to 1 + |m_j|: a few ulps, so K_j can fit strictly inside
 
 /**
- * Certifies one approximate solution: one Newton step (floating point) gives the centre m and Y ≈ J(x)⁻¹; boxes of
- * half-width r = max(4‖Δx‖∞, 4‖|Y|·|F(m)|‖∞, 2⁻⁴²(1 + ‖x‖∞)) are inflated (r ← max(8r, 2·dev K)) until Krawczyk's test passes or r
- * exceeds maxRadius·(1 + ‖x‖∞). With a real system (real parameters and constants) a box centred at Re(m), symmetric
+ * Certifies one approximate solution: one Newton step (floating point) gives the centre m and Y ≈ J(x)⁻¹; boxes with
+ * per-coordinate half-widths from the Newton step and |Y|·|F(m)| are inflated from K(X) until Krawczyk's test passes,
+ * the attempts run out, or a half-width exceeds maxRadius·(1 + ‖x‖∞). With a real system (real parameters and constants) a box centred at Re(m), symmetric
  * about the real subspace, is tried first: a pass proves the solution real.
  */
 export function createPointCertifier(system: CertifiableSystem, options: PointCertifierOptions = {}): PointCertifier {
@@ -43,16 +43,18 @@ export function createPointCertifier(system: CertifiableSystem, options: PointCe
   const tester = createKrawczykTester(system);
   const f0 = new Float64Array(2 * n), j0 = new Float64Array(2 * n * n), inverse = new Float64Array(2 * n * n);
   const step = new Float64Array(2 * n), centre = new Float64Array(2 * n), box = new Float64Array(4 * n);
-  const centreBox = new Float64Array(4 * n), centreValues = new Float64Array(4 * n);
+  const centreBox = new Float64Array(4 * n), centreValues = new Float64Array(4 * n), radii = new Float64Array(n);
 
-  /** A heuristic for the smallest useful radius: |Y|·|F(m)| with F(m) in interval arithmetic (rounding noise included). */
-  const noiseAt = (): number => {
+  /**
+   * Starting half-widths per coordinate: 2·(|Δx_j| + (|Y|·|F(m)|)_j) with F(m) in interval arithmetic (so its rounding
+   * noise counts), at least 2⁻⁴⁴(1 + |m_j|). A heuristic: it decides where to look, not what is proven.
+   */
+  const startRadii = (): void => {
     for (let j = 0; j < n; j++) {
       centreBox[4 * j] = centreBox[4 * j + 1] = centre[2 * j]!;
       centreBox[4 * j + 2] = centreBox[4 * j + 3] = centre[2 * j + 1]!;
     }
     system.intervalValues(centreBox, centreValues);
-    let noise = 0;
     for (let i = 0; i < n; i++) {
       let row = 0;
       for (let k = 0; k < n; k++) {
@@ -60,32 +62,35 @@ export function createPointCertifier(system: CertifiableSystem, options: PointCe
         const v = 4 * k;
         row += y * Math.max(Math.abs(centreValues[v]!), Math.abs(centreValues[v + 1]!), Math.abs(centreValues[v + 2]!), Math.abs(centreValues[v + 3]!));
       }
-      noise = Math.max(noise, row);
+      const size = Math.abs(centre[2 * i]!) + Math.abs(centre[2 * i + 1]!);
+      radii[i] = Math.max(2 * (row + Math.abs(step[2 * i]!) + Math.abs(step[2 * i + 1]!)), FLOOR * (1 + size));
     }
-    return noise;
   };
 
-  /** Tries boxes around centre (imaginary parts forced to 0 and the box symmetric when real); returns the radius or 0. */
-  const inflate = (real: boolean, start: number, limit: number): number => {
-    let r = start;
-    for (let a = 0; a < attempts && r <= limit; a++) {
+  /**
+   * Tries boxes centre ± radii (per coordinate, the same for real and imaginary parts), inflating each radius to twice
+   * the deviation of K(X) in that coordinate after a failure (ε-inflation). When real, the centre's imaginary parts are
+   * set to 0 and each imaginary interval is exactly [−r_j, r_j]. Returns the largest radius on success, else 0.
+   */
+  const inflate = (real: boolean, limit: number): number => {
+    if (real) for (let j = 0; j < n; j++) centre[2 * j + 1] = 0;
+    for (let a = 0; a < attempts; a++) {
+      let largest = 0;
       for (let j = 0; j < n; j++) {
-        const mr = centre[2 * j]!, mi = real ? 0 : centre[2 * j + 1]!;
+        const r = radii[j]!, mr = centre[2 * j]!, mi = centre[2 * j + 1]!;
+        largest = Math.max(largest, r);
         box[4 * j] = widenDown(mr - r); box[4 * j + 1] = widenUp(mr + r);
-        // a real box is exactly symmetric about the real subspace: imaginary part [−r, r]
         box[4 * j + 2] = real ? -r : widenDown(mi - r); box[4 * j + 3] = real ? r : widenUp(mi + r);
       }
-      if (real) for (let j = 0; j < n; j++) centre[2 * j + 1] = 0;
-      if (tester.test(box, centre, inverse)) return r;
-      let deviation = 0;
+      if (!(largest <= limit)) return 0;
+      if (tester.test(box, centre, inverse)) return largest;
       const k = tester.enclosure;
       for (let j = 0; j < n; j++) {
-        const mi = real ? 0 : centre[2 * j + 1]!;
-        deviation = Math.max(deviation, Math.abs(k[4 * j]! - centre[2 * j]!), Math.abs(k[4 * j + 1]! - centre[2 * j]!),
-          Math.abs(k[4 * j + 2]! - mi), Math.abs(k[4 * j + 3]! - mi));
+        const mr = centre[2 * j]!, mi = centre[2 * j + 1]!;
+        const deviation = Math.max(Math.abs(k[4 * j]! - mr), Math.abs(k[4 * j + 1]! - mr), Math.abs(k[4 * j + 2]! - mi), Math.abs(k[4 * j + 3]! - mi));
+        if (!(deviation < Infinity)) return 0; // NaN or overflow: more room will not help
+        radii[j] = Math.max(radii[j]!, 2 * deviation);
       }
-      if (!(deviation < Infinity)) return 0; // NaN or overflow: more room will not help
-      r = Math.max(8 * r, 2 * deviation);
     }
     return 0;
   };
@@ -114,16 +119,17 @@ export function createPointCertifier(system: CertifiableSystem, options: PointCe
       return fail(`not close enough to a solution: the Newton step ${stepSize.toExponential(2)} exceeds the bound ${(limit / 4).toExponential(2)}`);
     }
     for (let k = 0; k < 2 * n; k++) centre[k] = x[k]! - step[k]!;
-    const noise = noiseAt();
-    const start = Math.max(4 * stepSize, 4 * noise, MIN_RADIUS * scale);
     let imaginary = 0;
     for (let j = 0; j < n; j++) imaginary = Math.max(imaginary, Math.abs(centre[2 * j + 1]!));
     if (real && imaginary <= limit) {
-      const r = inflate(true, Math.max(start, 2 * imaginary), limit);
+      startRadii();
+      for (let j = 0; j < n; j++) radii[j] = Math.max(radii[j]!, 2 * Math.abs(centre[2 * j + 1]!));
+      const r = inflate(true, limit);
       if (r > 0) return { certified: true, certifiedReal: true, box: box.slice(), radius: r };
+      for (let k = 0; k < 2 * n; k++) centre[k] = x[k]! - step[k]!;
     }
-    for (let k = 0; k < 2 * n; k++) centre[k] = x[k]! - step[k]!;
-    const r = inflate(false, start, limit);
+    startRadii();
+    const r = inflate(false, limit);
     if (r > 0) return { certified: true, certifiedReal: false, box: box.slice(), radius: r };
     return fail(`Krawczyk's test failed on every box tried, up to half-width ${limit.toExponential(2)} (near-singular or clustered solution)`);
   };

@@ -12,6 +12,8 @@ export interface CertifiableSystem {
   readonly size: number;
   /** True when all constants of the graph are real: with real parameters the system then has real coefficients. */
   readonly realConstants: boolean;
+  /** Structural non-zeros of the Jacobian, row-major n×n (1 where ∂f_i/∂x_j is not identically 0). */
+  readonly jacobianPattern: Uint8Array;
   /** Sets the packed complex parameters (length 2·parameterCount); throws naming the problem on a bad length or value. */
   setParameters(parameters: Float64Array): void;
   /** Interval values F(X) into values (4n). */
@@ -62,6 +64,7 @@ export function compileCertifiableSystem(system: PolynomialSystem): CertifiableS
   return {
     size: n,
     realConstants: program.realConstants,
+    jacobianPattern: Uint8Array.from(program.jacobian, (r) => (r === null ? 0 : 1)),
     setParameters(parameters) {
       if (parameters.length !== 2 * parameterCount) {
         throw new RangeError(`expected ${parameterCount} complex parameters (${2 * parameterCount} numbers), got ${parameters.length} numbers`);

@@ -28,6 +28,14 @@ export function createKrawczykTester(system: CertifiableSystem): KrawczykTester 
   const centres = new Float64Array(2 * n * n); // J(X) as complex midpoints …
   const radii = new Float64Array(2 * n * n); // … and radii of the real and imaginary parts
   const work = new Float64Array(4), product = new Float64Array(4);
+  // per column j, the rows k with a structurally non-zero J_kj (CSR by column): Y·J(X) skips the zeros
+  const columnStart = new Int32Array(n + 1);
+  const rows: number[] = [];
+  for (let j = 0; j < n; j++) {
+    for (let k = 0; k < n; k++) if (system.jacobianPattern[k * n + j]) rows.push(k);
+    columnStart[j + 1] = rows.length;
+  }
+  const columnRows = Int32Array.from(rows);
 
   const test = (box: Float64Array, centre: Float64Array, inverse: Float64Array): boolean => {
     for (let j = 0; j < n; j++) {
@@ -62,7 +70,8 @@ export function createKrawczykTester(system: CertifiableSystem): KrawczykTester 
       for (let j = 0; j < n; j++) {
         // M_ij = δ_ij − Σ_k Y_ik · J_kj, the sum enclosed in midpoint–radius form with an a-priori rounding bound
         let sr = 0, si = 0, tr = 0, ti = 0, rr = 0, ri = 0;
-        for (let k = 0; k < n; k++) {
+        for (let q = columnStart[j]!, end = columnStart[j + 1]!; q < end; q++) {
+          const k = columnRows[q]!;
           const y = 2 * (i * n + k), c = 2 * (k * n + j);
           const yr = inverse[y]!, yi = inverse[y + 1]!, ayr = Math.abs(yr), ayi = Math.abs(yi);
           const cr = centres[c]!, ci = centres[c + 1]!, dr = radii[c]!, di = radii[c + 1]!;
@@ -73,8 +82,9 @@ export function createKrawczykTester(system: CertifiableSystem): KrawczykTester 
           rr += ayr * dr + ayi * di;
           ri += ayr * di + ayi * dr;
         }
-        dotEnclosure(2 * n, sr, tr, rr, product, 0);
-        dotEnclosure(2 * n, si, ti, ri, product, 2);
+        const terms = 2 * (columnStart[j + 1]! - columnStart[j]!);
+        dotEnclosure(terms, sr, tr, rr, product, 0);
+        dotEnclosure(terms, si, ti, ri, product, 2);
         const delta = i === j ? 1 : 0;
         const rl = widenDown(delta - product[1]!), rh = widenUp(delta - product[0]!), il = -product[3]!, ih = -product[2]!;
         // K_i += M_ij · (X_j − m_j)

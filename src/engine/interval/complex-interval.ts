@@ -37,6 +37,19 @@ export function complexNeg(out: Float64Array, o: number, a: Float64Array, ia: nu
 export function complexMul(out: Float64Array, o: number, a: Float64Array, ia: number, b: Float64Array, ib: number): void {
   const a0 = a[ia]!, a1 = a[ia + 1]!, b0 = a[ia + 2]!, b1 = a[ia + 3]!;
   const c0 = b[ib]!, c1 = b[ib + 1]!, d0 = b[ib + 2]!, d1 = b[ib + 3]!;
+  // fast path: the 16 endpoint products once each; any NaN (0·∞ or NaN input) takes the careful path below
+  const ac0 = a0 * c0, ac1 = a0 * c1, ac2 = a1 * c0, ac3 = a1 * c1;
+  const bd0 = b0 * d0, bd1 = b0 * d1, bd2 = b1 * d0, bd3 = b1 * d1;
+  const ad0 = a0 * d0, ad1 = a0 * d1, ad2 = a1 * d0, ad3 = a1 * d1;
+  const bc0 = b0 * c0, bc1 = b0 * c1, bc2 = b1 * c0, bc3 = b1 * c1;
+  const check = ac0 + ac1 + ac2 + ac3 + bd0 + bd1 + bd2 + bd3 + ad0 + ad1 + ad2 + ad3 + bc0 + bc1 + bc2 + bc3;
+  if (check - check === 0) {
+    out[o] = widenDown(widenDown(Math.min(ac0, ac1, ac2, ac3)) - widenUp(Math.max(bd0, bd1, bd2, bd3)));
+    out[o + 1] = widenUp(widenUp(Math.max(ac0, ac1, ac2, ac3)) - widenDown(Math.min(bd0, bd1, bd2, bd3)));
+    out[o + 2] = widenDown(widenDown(Math.min(ad0, ad1, ad2, ad3)) + widenDown(Math.min(bc0, bc1, bc2, bc3)));
+    out[o + 3] = widenUp(widenUp(Math.max(ad0, ad1, ad2, ad3)) + widenUp(Math.max(bc0, bc1, bc2, bc3)));
+    return;
+  }
   out[o] = widenDown(mulLo(a0, a1, c0, c1) - mulHi(b0, b1, d0, d1));
   out[o + 1] = widenUp(mulHi(a0, a1, c0, c1) - mulLo(b0, b1, d0, d1));
   out[o + 2] = widenDown(mulLo(a0, a1, d0, d1) + mulLo(b0, b1, c0, c1));
@@ -59,6 +72,15 @@ export function complexSqr(out: Float64Array, o: number, a: Float64Array, ia: nu
 /** The product of an exact complex double cr + i·ci and a rectangle b. */
 export function complexScale(out: Float64Array, o: number, cr: number, ci: number, b: Float64Array, ib: number): void {
   const c0 = b[ib]!, c1 = b[ib + 1]!, d0 = b[ib + 2]!, d1 = b[ib + 3]!;
+  const rc0 = cr * c0, rc1 = cr * c1, id0 = ci * d0, id1 = ci * d1, rd0 = cr * d0, rd1 = cr * d1, ic0 = ci * c0, ic1 = ci * c1;
+  const check = rc0 + rc1 + id0 + id1 + rd0 + rd1 + ic0 + ic1;
+  if (check - check === 0) {
+    out[o] = widenDown(widenDown(Math.min(rc0, rc1)) - widenUp(Math.max(id0, id1)));
+    out[o + 1] = widenUp(widenUp(Math.max(rc0, rc1)) - widenDown(Math.min(id0, id1)));
+    out[o + 2] = widenDown(widenDown(Math.min(rd0, rd1)) + widenDown(Math.min(ic0, ic1)));
+    out[o + 3] = widenUp(widenUp(Math.max(rd0, rd1)) + widenUp(Math.max(ic0, ic1)));
+    return;
+  }
   out[o] = widenDown(scaleLo(cr, c0, c1) - scaleHi(ci, d0, d1));
   out[o + 1] = widenUp(scaleHi(cr, c0, c1) - scaleLo(ci, d0, d1));
   out[o + 2] = widenDown(scaleLo(cr, d0, d1) + scaleLo(ci, c0, c1));
