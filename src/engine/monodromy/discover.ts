@@ -4,8 +4,8 @@ import type { ParameterLeg } from '../parameter/gamma-arc.ts';
 import { createPointIndex, type PointIndex } from '../parameter/point-index.ts';
 import { randomGamma, randomParameterPoint, reverseLeg, type LegTracker } from '../parameter/route.ts';
 
-/** Why discovery stopped: the known count was reached, no solution had an untravelled edge left, or a budget ran out. */
-export type MonodromyStop = 'known-count' | 'saturated' | 'stalled' | 'path-budget';
+/** Why discovery stopped: the known count was reached, a whole added node brought nothing new, or a budget ran out. */
+export type MonodromyStop = 'known-count' | 'saturated' | 'stalled' | 'path-budget' | 'node-budget';
 
 export interface MonodromyOptions {
   readonly track: LegTracker;
@@ -14,9 +14,19 @@ export interface MonodromyOptions {
   readonly random: RandomSource;
   /** The published generic count, when known: discovery stops as soon as one node holds that many. */
   readonly expected?: number;
-  /** Random parameter points besides the seed's (default 1) and edges between every pair (default 4). */
+  /** Random parameter points besides the seed's at the start (default 1) and edges between every pair (default 4). */
   readonly extraNodes?: number;
   readonly edgesPerPair?: number;
+  /**
+   * When no untravelled edge is left, a new random node joined by `joinEdges` (default 1) edges to each of the first
+   * two nodes is added (new loops outside the complex line of the first two, whose loops can miss branch points), at
+   * most `maxNodes` nodes in all (default 6); 'saturated' once `confirmations` added nodes in a row left the largest
+   * solution count unchanged.
+   */
+  readonly maxNodes?: number;
+  readonly joinEdges?: number;
+  /** How many added nodes in a row must leave the count unchanged before 'saturated' (default 2). */
+  readonly confirmations?: number;
   /** Stop after this many paths (default 40·expected or 100 000) or this many paths without a new solution (default ∞ when expected is given, else 2000). */
   readonly maxPaths?: number;
   readonly stallPaths?: number;
@@ -39,6 +49,9 @@ export interface MonodromyResult {
     /** Jumps that safe re-tracking did not resolve (neither correspondence recorded). */
     readonly unresolvedJumps: number;
     readonly rounds: number;
+    /** Parameter points and edges used. */
+    readonly nodes: number;
+    readonly edges: number;
     readonly steps: number[];
   };
 }
@@ -59,18 +72,23 @@ export async function discoverByMonodromy(options: MonodromyOptions): Promise<Mo
   const maxPaths = options.maxPaths ?? (expected !== undefined ? 40 * expected : 100_000);
   const stallPaths = options.stallPaths ?? (expected !== undefined ? Infinity : 2000);
   const roundSize = options.roundSize ?? 1024;
-  const nodes: { parameters: Float64Array; index: PointIndex }[] = [{ parameters: seed.parameters, index: createPointIndex(n, tolerance) }];
-  for (let k = 0; k < (options.extraNodes ?? 1); k++) nodes.push({ parameters: randomParameterPoint(np, random), index: createPointIndex(n, tolerance) });
+  const nodes: { parameters: Float64Array; index: PointIndex }[] = [];
   const edges: Edge[] = [];
-  for (let a = 0; a < nodes.length; a++) {
-    for (let b = a + 1; b < nodes.length; b++) {
-      for (let e = 0; e < (options.edgesPerPair ?? 4); e++) {
-        const leg: ParameterLeg = { from: nodes[a]!.parameters, to: nodes[b]!.parameters, gamma: randomGamma(random) };
+  const queue: Task[] = [];
+  const addNode = (parameters: Float64Array, edgesEach: number, neighbours: readonly number[]): void => {
+    const b = nodes.length;
+    nodes.push({ parameters, index: createPointIndex(n, tolerance) });
+    for (const a of neighbours) {
+      for (let e = 0; e < edgesEach; e++) {
+        const leg: ParameterLeg = { from: nodes[a]!.parameters, to: parameters, gamma: randomGamma(random) };
         edges.push({ a, b, leg, back: reverseLeg(leg), forward: new Map(), backward: new Map() });
+        const k = edges.length - 1;
+        nodes[a]!.index.points.forEach((_, j) => queue.push({ edge: k, reversed: false, start: j }));
       }
     }
-  }
-  const queue: Task[] = [];
+  };
+  addNode(seed.parameters, 0, []);
+  for (let k = 0; k < (options.extraNodes ?? 1); k++) addNode(randomParameterPoint(np, random), options.edgesPerPair ?? 4, nodes.map((_, i) => i));
   const tried = new Set<string>();
   const addSolution = (node: number, x: Float64Array): number => {
     const j = nodes[node]!.index.add(x);
@@ -84,9 +102,17 @@ export async function discoverByMonodromy(options: MonodromyOptions): Promise<Mo
   let paths = 0, failedPaths = 0, jumps = 0, unresolvedJumps = 0, rounds = 0, sinceNew = 0;
   const steps: number[] = [];
   const best = (): number => nodes.reduce((b, node, i) => (node.index.size > nodes[b]!.index.size ? i : b), 0);
+  let countWhenAdded = -1, fruitless = 0;
   const done = (): MonodromyStop | null => {
     if (expected !== undefined && nodes[best()]!.index.size >= expected) return 'known-count';
-    if (queue.length === 0) return 'saturated';
+    if (queue.length === 0) {
+      const most = nodes[best()]!.index.size;
+      fruitless = most === countWhenAdded ? fruitless + 1 : 0;
+      if (fruitless >= (options.confirmations ?? 2)) return 'saturated';
+      if (nodes.length >= (options.maxNodes ?? 6)) return 'node-budget';
+      countWhenAdded = most;
+      addNode(randomParameterPoint(np, random), options.joinEdges ?? 1, [0, 1]);
+    }
     if (sinceNew >= stallPaths) return 'stalled';
     if (paths >= maxPaths) return 'path-budget';
     return null;
@@ -154,7 +180,7 @@ export async function discoverByMonodromy(options: MonodromyOptions): Promise<Mo
     stop,
     parameters: nodes[b]!.parameters,
     solutions: [...nodes[b]!.index.points],
-    stats: { paths, failedPaths, jumps, unresolvedJumps, rounds, steps },
+    stats: { paths, failedPaths, jumps, unresolvedJumps, rounds, nodes: nodes.length, edges: edges.length, steps },
   };
 }
 

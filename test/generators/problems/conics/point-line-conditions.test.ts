@@ -3,6 +3,13 @@ import { pointLineProblem, characteristicNumbers, tangencyQuadric } from '../../
 import * as ops from '../../../../src/engine/expr/build.ts';
 import { systemOf } from '../../../../src/atlas/system-of.ts';
 import { evaluate, largestResidual, paramsFrom, real, type C } from '../shared/evaluate.ts';
+import { demoInstance, randomInstance, seeds, solveInstance } from '../shared/solve.ts';
+import conicsThrough5Points from '../../../../generators/problems/conics/conics-through-5-points.ts';
+import conicsThrough4Points from '../../../../generators/problems/conics/conics-through-4-points-tangent-to-1-line.ts';
+import conicsThrough3Points from '../../../../generators/problems/conics/conics-through-3-points-tangent-to-2-lines.ts';
+import conicsThrough2Points from '../../../../generators/problems/conics/conics-through-2-points-tangent-to-3-lines.ts';
+import conicsThrough1Point from '../../../../generators/problems/conics/conics-through-1-point-tangent-to-4-lines.ts';
+import conicsTangentTo5Lines from '../../../../generators/problems/conics/conics-tangent-to-5-lines.ts';
 
 const k = Object.fromEntries(['a', 'b', 'c', 'd', 'e', 'f'].map((n, i) => [n, ops.unknown(n, i)]));
 const tangency = (conic: number[], line: [number, number, number]) =>
@@ -42,5 +49,33 @@ describe('conics through points and tangent to lines: the conditions', () => {
       const params = paramsFrom(system.parameters, definition.instances[1]!.parameters as Record<string, number>);
       expect(largestResidual(system.equations, scaled, params)).toBeLessThan(1e-12);
     });
+  });
+});
+
+// The characteristic numbers of conics 1, 2, 4, 4, 2, 1 (Chasles 1864; Bashelor–Ksir–Traves, Amer. Math.
+// Monthly 115 (2008)). The surplus paths of the naive count 2^(5−p) must all end singular, on the double lines
+// (our own derivation: adj(M) = 0 there); with a complex chart none reach infinity.
+describe.each([
+  [conicsThrough5Points, 5],
+  [conicsThrough4Points, 4],
+  [conicsThrough3Points, 3],
+  [conicsThrough2Points, 2],
+  [conicsThrough1Point, 1],
+  [conicsTangentTo5Lines, 0],
+] as const)('solving %s', (definition, p) => {
+  const count = characteristicNumbers[p]!;
+  const bound = 2 ** (5 - p);
+
+  it.each(seeds(20))(`random complex instance %i: ${count} conics, ${bound - count} paths on the double lines, none failed`, async (seed) => {
+    const { report } = await solveInstance(definition, randomInstance(seed));
+    expect(report.solutions).toHaveLength(count);
+    expect(report.stats).toMatchObject({ tracked: bound, regular: count, singular: bound - count, atInfinity: 0, failed: 0 });
+    if (p === 2) expect(report.singular.map((s) => s.multiplicity)).toEqual([4]); // the one double line through both points
+  });
+
+  it(`the flower-bed demo: ${count} conics, all real`, async () => {
+    const { report, real } = await solveInstance(definition, demoInstance(definition, 'flower-bed'));
+    expect(report.solutions).toHaveLength(count);
+    expect(real).toBe(count);
   });
 });
