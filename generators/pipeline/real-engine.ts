@@ -8,11 +8,13 @@ import { AtlasError } from './atlas-error.ts';
  * To add a strategy (parameter homotopy, monodromy), add one entry to `strategies` below.
  */
 export async function loadEngine(): Promise<EngineServices> {
-  const [{ solveSystem, collectSolutions }, { certifySolutions }, { ENGINE_VERSION }, { solveByParameterHomotopy }] = await Promise.all([
+  const [{ solveSystem, collectSolutions }, { certifySolutions }, { ENGINE_VERSION }, { solveByParameterHomotopy }, { createPoolLegTracker }, { sharedPool }] = await Promise.all([
     import('../../src/engine/solve/solve-system.ts'),
     import('../../src/engine/certify/certify-solutions.ts'),
     import('../../src/engine/version.ts'),
     import('../../src/engine/parameter/solve-by-parameter-homotopy.ts'),
+    import('../../src/engine/parameter/pool-tracker.ts'),
+    import('../../src/engine/pool/shared-pool.ts'),
   ]);
   const startSystem = (start: 'total-degree' | 'multihomogeneous', label: string): SolveStrategy => ({
     label,
@@ -29,7 +31,9 @@ export async function loadEngine(): Promise<EngineServices> {
       solve: async (system, parameters, o, definition) => {
         const choice = definition.solver;
         if (choice?.kind !== 'parameter-homotopy') throw new AtlasError('input', `solver.kind: expected "parameter-homotopy"`);
-        return solveByParameterHomotopy(await choice.prepare(system), parameters, { seed: o.seed });
+        const problem = await choice.prepare(system);
+        const track = o.workers ? createPoolLegTracker(await sharedPool(o.workers), problem.working) : undefined;
+        return solveByParameterHomotopy(problem, parameters, { seed: o.seed, track });
       },
     },
   };
