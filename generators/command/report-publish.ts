@@ -15,7 +15,7 @@ export function reportPublished(ctx: CommandContext, slug: string, outcome: Publ
       ctx.stderr.write(`${slug}: replaced; history: ${outcome.change}\n`);
       return EXIT.ok;
     case 'refused':
-      ctx.stderr.write(`${slug}: refused to replace the published record, which is better:\n${outcome.reasons.map((r) => `  - ${r}\n`).join('')}  the published record is kept; pass --force to replace it anyway\n`);
+      ctx.stderr.write(`${slug}: refused to write the new record:\n${outcome.reasons.map((r) => `  - ${r}\n`).join('')}  content is left as it was; pass --force to write it anyway\n`);
       return EXIT.failed;
   }
 }

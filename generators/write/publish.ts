@@ -8,7 +8,7 @@ import { AtlasError } from '../pipeline/atlas-error.ts';
 import { displayPath } from '../pipeline/load-definition.ts';
 import { writeFileAtomic, type BeforeRename } from './atomic-write.ts';
 import { pagePath, recordPath } from './content-paths.ts';
-import { regressionReasons } from './regression-guard.ts';
+import { emptyReasons, regressionReasons } from './regression-guard.ts';
 import { renderPage } from './render-page.ts';
 
 /** Options of one publication: replace a worse record anyway, the history date (UTC YYYY-MM-DD), a test hook. */
@@ -27,7 +27,8 @@ export type PublishOutcome =
 /**
  * Writes a freshly solved record (its history is ignored) and its page under the content root. The published
  * record's history is carried over; identical bytes are not rewritten (the page is rewritten only if it differs);
- * a worse record is refused unless `force`; a replacement appends a history entry. Record first, then page, each
+ * a worse record (or one with an instance that found nothing though its count is positive) is refused unless
+ * `force`; a replacement appends a history entry. Record first, then page, each
  * atomically. A published record that cannot be read is an AtlasError('content') unless `force`.
  */
 export function publish(root: string, fresh: SolveRecord, options: PublishOptions = {}): PublishOutcome {
@@ -44,10 +45,10 @@ export function publish(root: string, fresh: SolveRecord, options: PublishOption
     writePage(root, record, options);
     return { status: 'unchanged', record };
   }
+  const reasons = [...emptyReasons(record), ...(published ? regressionReasons(published, record) : [])];
+  if (reasons.length > 0 && !options.force) return { status: 'refused', reasons };
   let change = '';
   if (published) {
-    const reasons = regressionReasons(published, record);
-    if (reasons.length > 0 && !options.force) return { status: 'refused', reasons };
     change = describeChange(published, record) + (reasons.length > 0 ? ` (forced over: ${reasons.join('; ')})` : '');
     const entry = { date: options.date ?? utcDate(), engineVersion: record.engineVersion, change };
     record = { ...record, history: [...record.history, entry] };

@@ -19,3 +19,13 @@ export function regressionReasons(published: SolveRecord, next: SolveRecord): st
   }
   return reasons;
 }
+
+/**
+ * Why a record is not worth publishing on its own, or []: an instance that found no solution although the published
+ * count is positive (a degenerate configuration, such as concentric circles, or a failed solve).
+ */
+export function emptyReasons(next: SolveRecord): string[] {
+  return next.instances
+    .filter((i) => i.counts.found === 0 && (i.counts.trueCount ?? 0) > 0)
+    .map((i) => `instance "${i.id}": found no solution where the published count is ${i.counts.trueCount} (${i.paths.singular} singular, ${i.paths.atInfinity} at infinity, ${i.paths.failed} failed paths; is the configuration degenerate?)`);
+}

@@ -51,7 +51,7 @@ describe('regenerate', () => {
     const published = readFileSync(recordPath(w.content, 'two-test-conics'), 'utf8');
     const worse = fakeContext({ problemsDir: w.problems, engine: () => fakeEngine({ lose: 2, version: 'fake-2' }) });
     expect(await runCommand(['regenerate', 'two-test-conics', '--content', w.content], worse.ctx)).toBe(1);
-    expect(worse.stderr.text).toMatch(/refused to replace the published record[\s\S]*found 2 < published 4[\s\S]*pass --force/);
+    expect(worse.stderr.text).toMatch(/refused to write the new record[\s\S]*found 2 < published 4[\s\S]*pass --force/);
     expect(readFileSync(recordPath(w.content, 'two-test-conics'), 'utf8')).toBe(published);
     const forced = fakeContext({ problemsDir: w.problems, engine: () => fakeEngine({ lose: 2, version: 'fake-2' }) });
     expect(await runCommand(['regenerate', 'two-test-conics', '--force', '--content', w.content], forced.ctx)).toBe(0);

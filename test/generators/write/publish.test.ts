@@ -63,6 +63,14 @@ describe('publishing a solve record', () => {
     expect(bytes(root)[1]).toMatch(/recordVersion: 2\n/);
   });
 
+  it('refuses a first record in which an instance found nothing although its count is positive', async () => {
+    const root = fresh();
+    const outcome = publish(root, await fakeRecord({ lose: 4 }), { date: '2026-01-02' });
+    expect(outcome.status).toBe('refused');
+    expect(outcome.status === 'refused' && outcome.reasons[0]).toMatch(/instance "generic": found no solution where the published count is 4 \(0 singular, 0 at infinity, 4 failed paths/);
+    expect(existsSync(join(root, 'records'))).toBe(false);
+  });
+
   it('accepts a better record without force and keeps the earlier history', async () => {
     const root = fresh();
     publish(root, await fakeRecord({ lose: 2 }), { date: '2026-01-02' });
