@@ -44,10 +44,12 @@ export interface Certifier {
   readonly system: CertifiableSystem;
   /** Certifies every point (packed complex approximate solutions) for the given packed complex parameters. */
   certify(parameters: Float64Array, points: readonly Float64Array[], options?: CertifyOptions): CertificationReport;
+  /** Krawczyk's test once on a given box (4n) for the given parameters: true proves exactly one solution inside. */
+  holdsOneSolution(parameters: Float64Array, box: Float64Array): boolean;
 }
 
 /** Decides whether the instance is real; throws naming the parameter when realParameters is claimed but false. */
-export function realInstance(system: CertifiableSystem, parameters: Float64Array, claimed: boolean | undefined): boolean {
+export function realInstance(realConstants: boolean, parameters: Float64Array, claimed: boolean | undefined): boolean {
   if (claimed === false) return false;
   for (let k = 1; k < parameters.length; k += 2) {
     if (parameters[k] !== 0) {
@@ -55,19 +57,25 @@ export function realInstance(system: CertifiableSystem, parameters: Float64Array
       return false;
     }
   }
-  return system.realConstants;
+  return realConstants;
 }
 
 /** Compiles the system once (throws a RangeError naming the sizes when it is not square). */
 export function prepareCertifier(polynomialSystem: PolynomialSystem): Certifier {
   const system = compileCertifiableSystem(polynomialSystem);
   const n = system.size;
+  let plain: ReturnType<typeof createPointCertifier> | null = null;
   return {
     system,
+    holdsOneSolution(parameters, box) {
+      system.setParameters(parameters);
+      plain ??= createPointCertifier(system);
+      return plain.hull(box);
+    },
     certify(parameters, points, options = {}) {
       const started = performance.now();
       system.setParameters(parameters);
-      const real = realInstance(system, parameters, options.realParameters);
+      const real = realInstance(system.realConstants, parameters, options.realParameters);
       const certifier = createPointCertifier(system, options);
       const results: PointCertificate[] = points.map((x, i) => {
         if (x.length !== 2 * n) throw new RangeError(`solution ${i} has ${x.length} numbers, expected ${2 * n} (packed complex)`);
