@@ -1,0 +1,9 @@
+/** "1 real solution" / "8 real solutions": a count with its noun, plural by appending "s" unless given. */
+export function countNoun(n: number, singular: string, plural = `${singular}s`): string {
+  return `${n.toLocaleString('en-US')} ${n === 1 ? singular : plural}`;
+}
+
+/** A family name for headings: first letter capitalised, the rest as recorded ("circles" → "Circles"). */
+export function familyLabel(family: string): string {
+  return family.charAt(0).toUpperCase() + family.slice(1);
+}
