@@ -16,10 +16,11 @@ export interface Homotopy {
   /** A linear solver fitted to this homotopy's Jacobian structure (block elimination, say); dense LU if absent. */
   createSolver?(): LinearSolver;
   /**
-   * Optional: true when x (this homotopy's coordinates, projective charts) lies within relative distance
-   * `tolerance` of the hyperplane at infinity of the target's affine space. Lets the tracker report 'at-infinity'.
+   * Optional: the relative distance of x (this homotopy's coordinates, in projective charts) from the
+   * hyperplane at infinity of the target's affine space, e.g. min over groups of |h_g| / max_j |X_j|.
+   * Lets the tracker report 'at-infinity' (distance ≤ 1e-8, or a steady positive valuation in the endgame).
    */
-  atInfinity?(x: Float64Array, tolerance: number): boolean;
+  infinityDistance?(x: Float64Array): number;
 }
 
 /** Factor-then-solve for one n×n complex matrix at a time; buffers are owned by the solver and reused. */

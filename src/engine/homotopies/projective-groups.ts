@@ -1,18 +1,21 @@
 import type { Homotopy } from '../homotopy.ts';
 
 /**
- * Adds the at-infinity test for multiprojective coordinates: `groups[g]` lists the coordinate indices of
- * group g with its homogenising coordinate LAST. x is at infinity when for some group
- * |x_h| ≤ tolerance · max_{j ∈ group} |x_j|.
+ * Adds the distance to infinity for multiprojective coordinates: `groups[g]` lists the coordinate indices of
+ * group g with its homogenising coordinate LAST; the distance is min_g |x_h| / max_{j ∈ group g} |x_j|.
  */
 export function withProjectiveGroups(homotopy: Homotopy, groups: readonly (readonly number[])[]): Homotopy {
-  const atInfinity = (x: Float64Array, tolerance: number): boolean => groups.some((g) => {
-    let m = 0;
-    for (const j of g) m = Math.max(m, Math.hypot(x[2 * j]!, x[2 * j + 1]!));
-    const h = g[g.length - 1]!;
-    return Math.hypot(x[2 * h]!, x[2 * h + 1]!) <= tolerance * m;
-  });
-  return { ...bind(homotopy), atInfinity };
+  const infinityDistance = (x: Float64Array): number => {
+    let d = Infinity;
+    for (const g of groups) {
+      let m = 0;
+      for (const j of g) m = Math.max(m, Math.hypot(x[2 * j]!, x[2 * j + 1]!));
+      const h = g[g.length - 1]!;
+      d = Math.min(d, Math.hypot(x[2 * h]!, x[2 * h + 1]!) / m);
+    }
+    return d;
+  };
+  return { ...bind(homotopy), infinityDistance };
 }
 
 function bind(h: Homotopy): Homotopy {

@@ -7,95 +7,133 @@ import { distInf, normInf } from '../complex/packed.ts';
  */
 export const ENDPOINT_RESIDUAL = 1e-8;
 
-/** Result of the Cauchy endgame: status, estimated winding number, and whether the estimates converged. */
+/** Result of the endgame: status, estimated winding number, and whether the path was seen to diverge. */
 export interface EndgameResult {
   status: SegmentStatus;
   winding: number;
+  /** true when the distance to infinity fell steadily like s^w, w > 0 (then x is the last sample, not a limit). */
+  diverged: boolean;
 }
 
 /**
- * The Cauchy endgame (Morgan–Sommese–Wampler, Numer. Math. 63, 1992): from x at t = end + r·u (u a unit
- * complex number pointing back along the path) track loops t = end + r·u·e^{iθ} around the end, counting
- * turns c until x returns to its start (relative 1e-6): c is the winding number (a loop that does not close
- * within maxWinding turns gives no estimate and the radius shrinks). The end value is the mean
- * of the m·c equally spaced samples (trapezoid rule for Cauchy's integral formula in s^{1/c}), exact up to
- * O((r/R)^{m}). Radii shrink by `radiusRatio` until two estimates agree to `endgameTolerance` and the
- * estimate's residual passes ENDPOINT_RESIDUAL.
- * Writes the estimate into x. Uses the stepper's buffers only plus four vectors made once per call site.
+ * Divergence test (in the spirit of Huber–Verschelde's valuations at infinity, SIAM J. Numer. Anal. 35, 1998):
+ * the distance to infinity d is sampled at s_k = r0·ρ^k. A diverging path has d_k ≈ a·ρ^{k·w}, w > 0: the
+ * valuation estimates w_k = log(d_k / d_{k−1}) / log ρ are steady and Aitken's Δ² extrapolation of d tends to 0.
+ * A finite end has d_k ≈ d* + a·ρ^{k/c}: its w_k shrink by the factor ρ^{1/c} per sample (over three estimates,
+ * by more than 16 % for winding numbers c ≤ 16) and Aitken recovers d* > 0. Diverging: d ≤ 0.1 and
+ * decreasing, the last three w_k in [1/64, 64] within 10 % of each other, and the extrapolated limit below
+ * a quarter of d (a finite end could pass only with winding number above 16 and d* ≤ 0.025, i.e. coordinates
+ * ≥ 40× the chart's scale: the documented blind spot).
  */
-export function createCauchyEndgame(stepper: Stepper): (x: Float64Array, endRe: number, endIm: number, uRe: number, uIm: number, r0: number) => EndgameResult {
+const DIVERGING_DISTANCE = 0.1;
+const LIMIT_FRACTION = 0.25;
+const VALUATION_SPREAD = 1.1;
+
+/**
+ * The endgame around t = end, from x at t = end + r0·u (u a unit complex number pointing back along the path),
+ * over radii r_k = r0·ρ^k (ρ = radiusRatio, at most 2·maxRounds radii), moving inward along the path's own
+ * direction between radii. At every radius the divergence test runs. Until the operating zone is reached
+ * (the ratios of successive differences, ρ^{1/c}, give estimates of c within 5 % three times in a row, as in
+ * the power-series endgame) nothing else happens; then Cauchy loops (Morgan–Sommese–Wampler, Numer. Math. 63,
+ * 1992): track t = end + r·u·e^{iθ} around the end, counting turns c until x returns to its start (relative
+ * 1e-6; no closure within maxWinding turns gives no estimate at this radius); the end value is the mean of the
+ * m·c equally spaced samples (trapezoid rule for Cauchy's integral formula in s^{1/c}). Accepted when two
+ * successive estimates with the same c agree to endgameTolerance and the estimate's residual passes
+ * ENDPOINT_RESIDUAL. Writes the estimate (or, diverging, the last sample) into x. Buffers made once here.
+ */
+export function createCauchyEndgame(stepper: Stepper, infinityDistance?: (x: Float64Array) => number): (x: Float64Array, endRe: number, endIm: number, uRe: number, uIm: number, r0: number) => EndgameResult {
   const len = 2 * stepper.n;
   const start = new Float64Array(len), sum = new Float64Array(len), estimate = new Float64Array(len), previous = new Float64Array(len);
-  const result: EndgameResult = { status: 'ok', winding: 1 };
+  const result: EndgameResult = { status: 'ok', winding: 1, diverged: false };
+  const dd = new Float64Array(4), cc = new Float64Array(3);
   return (x, endRe, endIm, uRe, uIm, r0) => {
     const s = stepper.settings;
-    const m = s.loopSamples;
-    let r = r0, havePrevious = false, lastWinding = 0;
-    // Operating zone (as in the power-series endgame): step in geometrically, s_k = r0·ρ^k, until the ratios of
-    // successive differences, ρ^{1/c}, give the same estimate of c twice; loops start there.
-    let d1 = NaN, c1 = NaN;
-    for (let k = 0; k < s.maxRounds; k++) {
-      for (let i = 0; i < len; i++) start[i] = x[i]!;
+    let r = r0, havePrevious = false, lastWinding = 0, inZone = false, step = NaN;
+    let stepStatus: SegmentStatus = 'ok';
+    dd.fill(NaN);
+    cc.fill(NaN);
+    if (infinityDistance) dd[3] = infinityDistance(x);
+    result.diverged = false;
+    for (let k = 0; k < 2 * s.maxRounds; k++) {
+      if (inZone) {
+        const winding = loop(x, r);
+        if (winding < 0) return fail(stepStatus);
+        if (winding > 0) {
+          if (havePrevious && winding === lastWinding && distInf(estimate, previous) <= s.endgameTolerance * (1 + normInf(estimate))
+            && stepper.residual(estimate, endRe, endIm) <= ENDPOINT_RESIDUAL) {
+            x.set(estimate);
+            return done(winding, false);
+          }
+          previous.set(estimate);
+        }
+        havePrevious = winding > 0;
+        lastWinding = winding;
+      }
+      start.set(x);
       const rNext = r * s.radiusRatio;
-      const status = stepper.segment(x, endRe + r * uRe, endIm + r * uIm, endRe + rNext * uRe, endIm + rNext * uIm);
-      if (status !== 'ok') return fail(status);
+      stepStatus = stepper.segment(x, endRe + r * uRe, endIm + r * uIm, endRe + rNext * uRe, endIm + rNext * uIm);
+      if (stepStatus !== 'ok') return fail(stepStatus);
       r = rNext;
-      const d = distInf(x, start);
-      const c = Math.log(s.radiusRatio) / Math.log(d / d1);
-      if (Math.abs(c - c1) < 0.1 * Math.max(1, c) || d <= 1e-12 * (1 + normInf(x))) break;
-      d1 = d;
-      c1 = c;
+      if (infinityDistance && diverging(infinityDistance(x))) return done(1, true);
+      if (!inZone) {
+        const d = distInf(x, start);
+        cc[0] = cc[1]!; cc[1] = cc[2]!; cc[2] = Math.log(s.radiusRatio) / Math.log(d / step);
+        step = d;
+        const lo = Math.min(cc[0]!, cc[1]!, cc[2]!), hi = Math.max(cc[0]!, cc[1]!, cc[2]!);
+        inZone = (lo > 0.5 && hi <= 1.05 * lo) || d <= 1e-12 * (1 + normInf(x));
+      }
     }
-    for (let round = 0; round < s.maxRounds; round++) {
-      for (let i = 0; i < len; i++) { start[i] = x[i]!; sum[i] = 0; }
-      let winding = 0;
-      let closed = false;
-      for (let turn = 1; turn <= s.maxWinding && !closed; turn++) {
+    if (havePrevious) x.set(previous);
+    return fail('no-convergence');
+
+    /** Records the next distance to infinity and applies the divergence test. */
+    function diverging(next: number): boolean {
+      dd.copyWithin(0, 1);
+      dd[3] = next;
+      const logRho = Math.log(s.radiusRatio);
+      const w1 = Math.log(dd[1]! / dd[0]!) / logRho, w2 = Math.log(dd[2]! / dd[1]!) / logRho, w3 = Math.log(dd[3]! / dd[2]!) / logRho;
+      const lo = Math.min(w1, w2, w3), hi = Math.max(w1, w2, w3);
+      const [e0, e1, e2] = [dd[1]!, dd[2]!, dd[3]!];
+      const limit = e2 - ((e2 - e1) * (e2 - e1)) / (e2 - 2 * e1 + e0);
+      return e2 <= DIVERGING_DISTANCE && lo >= 1 / 64 && hi <= 64 && hi <= VALUATION_SPREAD * lo && Math.abs(limit) <= LIMIT_FRACTION * e2;
+    }
+
+    /** One loop at radius r from x: the winding number (mean in `estimate`, x back at its start), 0 if not closed, −1 on a tracking failure. */
+    function loop(x: Float64Array, r: number): number {
+      const m = s.loopSamples;
+      start.set(x);
+      sum.fill(0);
+      for (let turn = 1; turn <= s.maxWinding; turn++) {
         for (let k = 0; k < m; k++) {
           const a0 = (2 * Math.PI * k) / m, a1 = (2 * Math.PI * (k + 1)) / m;
           const c0 = Math.cos(a0), s0 = Math.sin(a0), c1 = Math.cos(a1), s1 = Math.sin(a1);
           const aRe = endRe + r * (uRe * c0 - uIm * s0), aIm = endIm + r * (uRe * s0 + uIm * c0);
           const bRe = endRe + r * (uRe * c1 - uIm * s1), bIm = endIm + r * (uRe * s1 + uIm * c1);
-          const status = stepper.segment(x, aRe, aIm, bRe, bIm);
-          if (status !== 'ok') return fail(status);
+          stepStatus = stepper.segment(x, aRe, aIm, bRe, bIm);
+          if (stepStatus !== 'ok') return -1;
           stepper.newton(x, bRe, bIm, s.finalTolerance, 3);
           for (let i = 0; i < len; i++) sum[i] = sum[i]! + x[i]!;
         }
-        winding = turn;
-        closed = distInf(x, start) <= 1e-6 * (1 + normInf(x));
-      }
-      if (closed) {
-        for (let i = 0; i < len; i++) estimate[i] = sum[i]! / (m * winding);
-        // make the loop's end point exactly its start again, so rounding drift does not accumulate
-        for (let i = 0; i < len; i++) x[i] = start[i]!;
-        if (havePrevious && winding === lastWinding && distInf(estimate, previous) <= s.endgameTolerance * (1 + normInf(estimate))
-          && stepper.residual(estimate, endRe, endIm) <= ENDPOINT_RESIDUAL) {
-          for (let i = 0; i < len; i++) x[i] = estimate[i]!;
-          result.status = 'ok';
-          result.winding = winding;
-          return result;
+        if (distInf(x, start) <= 1e-6 * (1 + normInf(x))) {
+          for (let i = 0; i < len; i++) estimate[i] = sum[i]! / (m * turn);
+          x.set(start); // back exactly to the start, so rounding drift does not accumulate
+          return turn;
         }
-        for (let i = 0; i < len; i++) previous[i] = estimate[i]!;
-        havePrevious = true;
-        lastWinding = winding;
-      } else {
-        // other branch points inside the circle: no estimate at this radius; move closer to the end
-        for (let i = 0; i < len; i++) x[i] = start[i]!;
-        havePrevious = false;
-        lastWinding = 0;
       }
-      const rNext = r * s.radiusRatio;
-      const status = stepper.segment(x, endRe + r * uRe, endIm + r * uIm, endRe + rNext * uRe, endIm + rNext * uIm);
-      if (status !== 'ok') return fail(status);
-      r = rNext;
+      x.set(start); // other branch points inside the circle: no estimate at this radius
+      return 0;
     }
-    if (havePrevious) for (let i = 0; i < len; i++) x[i] = previous[i]!;
-    return fail('no-convergence');
-
+    function done(winding: number, diverged: boolean): EndgameResult {
+      result.status = 'ok';
+      result.winding = winding;
+      result.diverged = diverged;
+      return result;
+    }
     function fail(status: SegmentStatus): EndgameResult {
       result.status = status;
       result.winding = lastWinding || 1;
       return result;
     }
   };
+
 }

@@ -18,7 +18,7 @@ export interface Tracker {
    * its end in the homotopy's own coordinates. Stages: predictor–corrector to tEnd ∓ endgameStart; a straight
    * approach to tEnd (≤ 40 attempts, aborted when the condition estimate passes singularCondition); else the
    * Cauchy endgame. A failed path is re-tracked up to settings.retries times with stricterSettings; steps and
-   * rejections are summed over all attempts. Outcome 'at-infinity' needs homotopy.atInfinity.
+   * rejections are summed over all attempts. Outcome 'at-infinity' needs homotopy.infinityDistance.
    */
   track(start: Float64Array, tStart?: number, tEnd?: number): PathEnd;
 }
@@ -27,31 +27,31 @@ export interface Tracker {
 export function createTracker(homotopy: Homotopy, settings: Partial<TrackerSettings> = {}): Tracker {
   const base: TrackerSettings = { ...DEFAULT_TRACKER_SETTINGS, ...settings };
   const stepper = createStepper(homotopy, base);
-  const endgame = createCauchyEndgame(stepper);
+  const endgame = createCauchyEndgame(stepper, homotopy.infinityDistance?.bind(homotopy));
   const len = 2 * homotopy.n;
   const saved = new Float64Array(len);
 
-  function attempt(x: Float64Array, tStart: number, tEnd: number): { status: SegmentStatus; winding: number } {
+  function attempt(x: Float64Array, tStart: number, tEnd: number): { status: SegmentStatus; winding: number; diverged: boolean } {
     const s = stepper.settings;
     const span = Math.abs(tEnd - tStart);
     const u = tStart < tEnd ? -1 : 1;
     if (s.endgameStart <= 0 || span <= s.endgameStart) {
       const status = stepper.segment(x, tStart, 0, tEnd, 0);
       if (status === 'ok') stepper.newton(x, tEnd, 0, s.finalTolerance, 6);
-      return { status, winding: 1 };
+      return { status, winding: 1, diverged: false };
     }
     const tE = tEnd + u * s.endgameStart;
     const status = stepper.segment(x, tStart, 0, tE, 0);
-    if (status !== 'ok') return { status, winding: 1 };
+    if (status !== 'ok') return { status, winding: 1, diverged: false };
     saved.set(x);
     const approach = stepper.segment(x, tE, 0, tEnd, 0, s.singularCondition, APPROACH_ATTEMPTS);
     if (approach === 'ok' && stepper.newton(x, tEnd, 0, s.finalTolerance, 6) && stepper.condition <= s.singularCondition) {
-      return { status: 'ok', winding: 1 };
+      return { status: 'ok', winding: 1, diverged: false };
     }
     x.set(saved);
     const result = endgame(x, tEnd, 0, u, 0, s.endgameStart);
-    if (result.status === 'ok' && result.winding === 1) stepper.newton(x, tEnd, 0, s.finalTolerance, 6);
-    return { status: result.status, winding: result.winding };
+    if (result.status === 'ok' && result.winding === 1 && !result.diverged) stepper.newton(x, tEnd, 0, s.finalTolerance, 6);
+    return { status: result.status, winding: result.winding, diverged: result.diverged };
   }
 
   function track(start: Float64Array, tStart = 0, tEnd = 1): PathEnd {
@@ -63,23 +63,23 @@ export function createTracker(homotopy: Homotopy, settings: Partial<TrackerSetti
       stepper.rejected = 0;
       stepper.stepSize = stepper.settings.maxStep / 4;
       const x = Float64Array.from(start);
-      const { status, winding } = attempt(x, tStart, tEnd);
+      const { status, winding, diverged } = attempt(x, tStart, tEnd);
       steps += stepper.steps;
       rejected += stepper.rejected;
       const finite = allFinite(x, len);
       if ((status === 'ok' && finite) || k >= base.retries) {
         const failure: FailureReason | undefined = !finite ? 'non-finite' : status === 'ok' ? undefined : status === 'ill-conditioned' ? 'no-convergence' : status;
-        return finish(x, tEnd, winding, steps, rejected, k, failure);
+        return finish(x, tEnd, winding, diverged, steps, rejected, k, failure);
       }
     }
   }
 
-  function finish(x: Float64Array, tEnd: number, winding: number, steps: number, rejectedSteps: number, retries: number, failure?: FailureReason): PathEnd {
+  function finish(x: Float64Array, tEnd: number, winding: number, diverged: boolean, steps: number, rejectedSteps: number, retries: number, failure?: FailureReason): PathEnd {
     const residual = allFinite(x, len) ? stepper.residual(x, tEnd, 0) : Infinity;
     const condition = Number.isFinite(residual) ? stepper.condition : Infinity;
     let outcome: PathOutcome;
     if (failure !== undefined) outcome = 'failed';
-    else if (homotopy.atInfinity?.(x, INFINITY_TOLERANCE)) outcome = 'at-infinity';
+    else if (diverged || (homotopy.infinityDistance?.(x) ?? Infinity) <= INFINITY_TOLERANCE) outcome = 'at-infinity';
     else outcome = winding > 1 || !(condition <= base.singularCondition) ? 'singular' : 'regular';
     const end: PathEnd = { outcome, point: x, residual, condition, windingNumber: winding, steps, rejectedSteps, retries };
     return failure === undefined ? end : { ...end, failure };
