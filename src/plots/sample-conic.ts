@@ -7,15 +7,18 @@ export type ConicKind = 'ellipse' | 'hyperbola' | 'parabola' | 'line-pair' | 'pa
 /** A sampled conic: its kind and the polylines (world coordinates) of its real points inside the window. */
 export interface SampledConic { readonly kind: ConicKind; readonly runs: Point[][] }
 
-const SAMPLES = 1200;
+/** Default samples per branch (ellipses: at least this many around the whole curve). */
+export const CONIC_SAMPLES = 1200;
 
 /**
  * Samples the real points of a·x² + b·xy + c·y² + d·x + e·y + f = 0 inside the window. Rotates to principal axes,
  * then parametrizes per case: ellipse (angle), hyperbola (cosh/sinh per branch), parabola (along its axis over the
  * window's extent), degenerate line pairs and parallel lines (clipped lines), a single point (empty run list).
- * Coefficients are scaled by their largest magnitude; "zero" means below 1e-10 after scaling.
+ * Coefficients are scaled by their largest magnitude; "zero" means below 1e-10 after scaling. `samples` sets the
+ * points per branch (ellipses: the minimum around the curve, more when it is large against the window).
  */
-export function sampleConic(coefficients: readonly number[], w: WorldWindow): SampledConic {
+export function sampleConic(coefficients: readonly number[], w: WorldWindow, samples = CONIC_SAMPLES): SampledConic {
+  const SAMPLES = Math.max(16, Math.floor(samples));
   if (coefficients.length !== 6 || !coefficients.every(Number.isFinite)) {
     throw new Error(`conic coefficients must be 6 finite numbers, got [${coefficients.join(', ')}]`);
   }
@@ -66,7 +69,7 @@ export function sampleConic(coefficients: readonly number[], w: WorldWindow): Sa
     if (k / l1 < 0) return { kind: 'empty', runs: [] };
     const A = Math.sqrt(k / l1), B = Math.sqrt(k / l2);
     const diag = Math.hypot(w.xMax - w.xMin, w.yMax - w.yMin);
-    const n = Math.min(200_000, Math.max(720, Math.ceil((2 * Math.PI * Math.max(A, B)) / (diag / 400))));
+    const n = Math.min(200_000, Math.max(SAMPLES, Math.ceil((2 * Math.PI * Math.max(A, B)) / (diag / 400))));
     const pts: Point[] = [];
     for (let i = 0; i < n; i++) {
       const t = (2 * Math.PI * i) / n;

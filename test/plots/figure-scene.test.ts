@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { figureScene, POINT_RADIUS } from '../../src/plots/figure-scene.ts';
+import { figureScene, POINT_RADIUS, thin } from '../../src/plots/figure-scene.ts';
 import type { Figure } from '../../src/atlas/figure.ts';
 import { fixtureRecord } from '../site/fixture-record.ts';
 
@@ -57,4 +57,31 @@ describe('figureScene', () => {
     for (const t of scene.xTicks) expect(t.at > 12 && t.at < 388).toBe(true);
     for (const t of scene.yTicks) expect(t.at > 12 && t.at < 188).toBe(true);
   });
+});
+
+describe('figureScene on large figures', () => {
+  const many = (n: number): Figure => ({ window: W, items: [
+    { shape: 'circle', cx: 0, cy: 0, r: 0.5, layer: 'given' },
+    ...Array.from({ length: n }, (_, k) => ({ shape: 'conic' as const, coefficients: [1, 0, 4, 0, 0, -(k + 1) / n] as [number, number, number, number, number, number], layer: 'solution', solution: k })),
+  ] });
+  it('draws only the first maxSolutions solutions and reports the rest', () => {
+    const scene = figureScene(many(30), 400, 10);
+    expect(scene.drawnSolutions).toBe(10);
+    expect(scene.omittedSolutions).toBe(20);
+    expect(scene.layers.find((l) => l.name === 'solution')!.items.map((i) => i.solution)).toEqual([0, 1, 2, 3, 4, 5, 6, 7, 8, 9]);
+    expect(scene.layers.find((l) => l.name === 'given')!.items).toHaveLength(1);
+  });
+  it('shares the sampling budget among many conics, keeping the page small', () => {
+    const scene = figureScene(many(200), 400);
+    const bytes = scene.layers.flatMap((l) => l.items).reduce((s, i) => s + String(i.attrs.d ?? '').length, 0);
+    expect(scene.omittedSolutions).toBe(0);
+    expect(bytes).toBeLessThan(1_000_000);
+  });
+});
+
+describe('thin', () => {
+  it('drops points closer than the gap but keeps both ends', () => {
+    expect(thin([[0, 0], [0.1, 0], [0.2, 0], [1, 0], [1.1, 0]], 0.5)).toEqual([[0, 0], [1, 0], [1.1, 0]]);
+  });
+  it('leaves two-point runs alone', () => expect(thin([[0, 0], [0, 0.1]], 0.5)).toEqual([[0, 0], [0, 0.1]]));
 });
