@@ -46,14 +46,17 @@ export const partSchema = z.object({
   })),
 });
 
-/** A parsed part file. */
-export type SolvePart = z.infer<typeof partSchema>;
+/** A parsed part file (non-finite numbers restored to Infinity). */
+export type SolvePart = z.output<typeof partSchema>;
+
+/** A part file as written (non-finite numbers as null). */
+export type SolvePartFile = z.input<typeof partSchema>;
 
 /** Solves batch `shard.index` of `shard.count` of every instance and returns the part (no certification, no record). */
-export async function solveShard(loaded: LoadedDefinition, target: string, engine: EngineServices, shard: { index: number; count: number }, options: SolveOptions = {}): Promise<SolvePart> {
+export async function solveShard(loaded: LoadedDefinition, target: string, engine: EngineServices, shard: { index: number; count: number }, options: SolveOptions = {}): Promise<SolvePartFile> {
   const strategy = strategyFor(loaded.definition, engine, displayPath(loaded.file));
   if (!strategy.shardable) throw new AtlasError('input', `${displayPath(loaded.file)}: solver.kind: "${loaded.definition.solver?.kind}" cannot be split into shards`);
-  const instances = [];
+  const instances: SolvePartFile['instances'] = [];
   for (const original of loaded.definition.instances) {
     const instance = options.seed === undefined ? original : { ...original, seed: options.seed };
     const parameters = instanceParameters(loaded, instance);
@@ -61,9 +64,9 @@ export async function solveShard(loaded: LoadedDefinition, target: string, engin
     const report = await runEngine(`${displayPath(loaded.file)}: instance "${instance.id}"`, () =>
       strategy.solve(loaded.system, parameters, { seed: instance.seed, workers: options.workers, shard, onProgress }, loaded.definition));
     const ends = report.ends.map((e) => ({ ...e, point: Array.from(e.point, finiteOrNull), residual: finiteOrNull(e.residual), condition: finiteOrNull(e.condition) }));
-    instances.push({ id: instance.id, seed: instance.seed, bezoutBound: report.bezoutBound, multihomogeneousBound: report.multihomogeneousBound ?? null, startSystem: report.startSystem ?? 'total-degree', ends });
+    instances.push({ id: instance.id, seed: instance.seed, bezoutBound: report.bezoutBound, multihomogeneousBound: report.multihomogeneousBound ?? null, startSystem: report.startSystem === 'multihomogeneous' ? 'multihomogeneous' : 'total-degree', ends });
   }
-  return { format: 'atlas-solve-part', formatVersion: 1, target, slug: loaded.definition.slug, definitionHash: loaded.hash, engineVersion: engine.version, shard, instances } as unknown as SolvePart;
+  return { format: 'atlas-solve-part', formatVersion: 1, target, slug: loaded.definition.slug, definitionHash: loaded.hash, engineVersion: engine.version, shard, instances };
 }
 
 /**
@@ -84,8 +87,9 @@ export async function mergeParts(loaded: LoadedDefinition, engine: EngineService
   const results: InstanceResult[] = [];
   const seconds: number[] = [];
   for (const [j, head] of first.instances.entries()) {
-    const instance = { ...loaded.definition.instances.find((i) => i.id === head.id)!, seed: head.seed };
-    if (!instance.id) throw new AtlasError('input', `merge: instance "${head.id}" is not in the definition`);
+    const known = loaded.definition.instances.find((i) => i.id === head.id);
+    if (!known) throw new AtlasError('input', `merge: instance "${head.id}" is not in the definition`);
+    const instance = { ...known, seed: head.seed };
     const ends: PathEnd[] = sorted.flatMap((p) => p.instances[j]!.ends.map((e) => ({ ...e, point: Float64Array.from(e.point) })) as PathEnd[]);
     const parameters = instanceParameters(loaded, instance);
     const where = `merge: instance "${instance.id}"`;
