@@ -32,7 +32,7 @@ const demoParameters: Record<string, ComplexInput> = Object.fromEntries(demoQuar
 const curve = (q: Readonly<Record<string, number>>): FigureItem[] => planeCurveItems(q, names, exponents, view, 'the quartic', 220);
 
 /** The fixed complex chart of lines: (x, y) = A·(X, Y) with lines Y = mX + k; our own arbitrary non-real numbers. */
-const chart: ComplexMatrix2 = [[1, 0], [0.35, 0.55], [-0.25, 0.45], [1, 0]];
+export const lineChart: ComplexMatrix2 = [[1, 0], [0.35, 0.55], [-0.25, 0.45], [1, 0]];
 
 /**
  * The real points where the real line ux + vy + w = 0 touches the quartic, read off its restriction
@@ -65,7 +65,7 @@ export default defineProblem({
     equations: (u, q, ops) => {
       // On the line, (x, y) = A·(t, mt + k); q(t) = f(x, y) = Σ q_i t^i must equal q₄·(t² + αt + β)².
       const c = (z: readonly [number, number]) => ops.constant(z[0], z[1]);
-      const [a11, a12, a21, a22] = chart;
+      const [a11, a12, a21, a22] = lineChart;
       const x = [ops.mul(c(a12), u.k!), ops.add(c(a11), ops.mul(c(a12), u.m!))];
       const y = [ops.mul(c(a22), u.k!), ops.add(c(a21), ops.mul(c(a22), u.m!))];
       const inT = substitute(ops, names.map((n) => q[n]!), exponents, [x, y]);
@@ -90,7 +90,7 @@ export default defineProblem({
     ].join(' '),
     coordinates: {
       names: ['u', 'v', 'w'],
-      map: (x) => normalizeByLargest(imageLine(chart, [x[0]!, x[1]!], [x[2]!, x[3]!])),
+      map: (x) => normalizeByLargest(imageLine(lineChart, [x[0]!, x[1]!], [x[2]!, x[3]!])),
     },
   },
   trueCount: {
@@ -104,7 +104,11 @@ export default defineProblem({
       note: 'Plücker’s formulas (1834) give ½d(d − 2)(d − 3)(d + 3) = 28 bitangents for d = 4; his 1839 book has the quartic with four ovals and 28 real bitangents. Details from memory.',
     },
   },
-  excessNote: 'PENDING',
+  excessNote: [
+    'The naive counts, $1080$ (total degree) and $288$ (two-homogeneous), far exceed $28$; the surplus lies at infinity of the charts.',
+    'When $q_4(m) = 0$ the line runs in an asymptotic direction of the curve, $q$ drops degree, and $q = q_4\\,(t^2 + \\alpha t + \\beta)^2$ can only be met in the limit with $\\alpha$ or $\\beta$ infinite;',
+    'lines escaping to infinity in the $(m, k)$ chart give more limits of the same kind. With the two-homogeneous start all $260$ surplus paths end at infinity; the record counts them.',
+  ].join(' '),
   instances: [
     genericInstance('A random complex quartic', 20260108, 'All 15 coefficients'),
     {

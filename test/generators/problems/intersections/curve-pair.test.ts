@@ -3,6 +3,7 @@ import conics from '../../../../generators/problems/intersections/points-common-
 import cubics from '../../../../generators/problems/intersections/points-common-to-two-cubics.ts';
 import { systemOf } from '../../../../src/atlas/system-of.ts';
 import { largestResidual, real, type C } from '../shared/evaluate.ts';
+import { demoInstance, randomInstance, seeds, solveInstance } from '../shared/solve.ts';
 
 describe.each([[conics, 2], [cubics, 3]] as const)('%s', (definition, d) => {
   const system = systemOf(definition);
@@ -29,5 +30,20 @@ describe.each([[conics, 2], [cubics, 3]] as const)('%s', (definition, d) => {
     const items = definition.drawing!.configuration(demo.parameters as Record<string, number>);
     expect(items.length).toBeGreaterThanOrEqual(2);
     expect(new Set(items.map((i) => i.shape))).toEqual(new Set([d === 2 ? 'conic' : 'polyline']));
+  });
+});
+
+// Bézout's theorem (Fulton, Algebraic Curves, 1969): two general plane curves of degrees d and e meet in d·e points.
+describe.each([[conics, 4, 'two-running-tracks'], [cubics, 9, 'woven-threads']] as const)('solving %s', (definition, count, demo) => {
+  it.each(seeds(20))(`random complex instance %i: ${count} common points, every path regular`, async (seed) => {
+    const { report } = await solveInstance(definition, randomInstance(seed));
+    expect(report.solutions).toHaveLength(count);
+    expect(report.stats).toMatchObject({ tracked: count, regular: count, singular: 0, atInfinity: 0, failed: 0 });
+  });
+
+  it(`the demo curves meet in ${count} real points`, async () => {
+    const { report, real } = await solveInstance(definition, demoInstance(definition, demo));
+    expect(report.solutions).toHaveLength(count);
+    expect(real).toBe(count);
   });
 });

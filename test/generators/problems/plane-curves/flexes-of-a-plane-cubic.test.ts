@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import definition from '../../../../generators/problems/plane-curves/flexes-of-a-plane-cubic.ts';
 import { systemOf } from '../../../../src/atlas/system-of.ts';
 import { evaluate, paramsFrom, real } from '../shared/evaluate.ts';
+import { demoInstance, randomInstance, seeds, solveInstance } from '../shared/solve.ts';
 
 const system = systemOf(definition);
 // The Fermat cubic x³ + y³ + 1 = 0: its flexes are the 9 points with one homogeneous coordinate 0, e.g. (−1, 0)
@@ -23,5 +24,20 @@ describe('flexes of a plane cubic: the formulation', () => {
   it('the Hessian of the Fermat cubic is 216·xy (times z = 1)', () => {
     const [x, y] = [0.3, -1.7];
     expect(evaluate(system.equations[1]!, real([x, y]), fermat)[0]).toBeCloseTo(216 * x * y, 9);
+  });
+});
+
+// A smooth plane cubic has 9 flexes (Hesse 1844; Plücker's 3d(d − 2)); a real one has exactly 3 real flexes.
+describe('solving flexes of a plane cubic', () => {
+  it.each(seeds(20))('random complex cubic %i: 9 flexes, every path regular', async (seed) => {
+    const { report } = await solveInstance(definition, randomInstance(seed));
+    expect(report.solutions).toHaveLength(9);
+    expect(report.stats).toMatchObject({ tracked: 9, regular: 9, singular: 0, atInfinity: 0, failed: 0 });
+  });
+
+  it('the toy railway cubic: 9 flexes, exactly 3 real', async () => {
+    const { report, real } = await solveInstance(definition, demoInstance(definition, 'toy-railway'));
+    expect(report.solutions).toHaveLength(9);
+    expect(real).toBe(3);
   });
 });

@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import definition from '../../../../generators/problems/schubert/lines-meeting-four-lines.ts';
 import { systemOf } from '../../../../src/atlas/system-of.ts';
 import { largestResidual, paramsFrom, real } from '../shared/evaluate.ts';
+import { demoInstance, randomInstance, seeds, solveInstance } from '../shared/solve.ts';
 
 const system = systemOf(definition);
 
@@ -22,5 +23,27 @@ describe('lines meeting four lines: the formulation', () => {
 
   it('has bidegree (1, 1) in the groups {s}, {t}: two-homogeneous bound 2', () => {
     expect(system.groups).toEqual([[0], [1]]);
+  });
+});
+
+// Two lines meet four general lines in space (Schubert, Kalkül der abzählenden Geometrie, 1879).
+describe('solving lines meeting four lines', () => {
+  it.each(seeds(20))('random complex instance %i, total degree: 2 transversals, the other 2 paths at infinity', async (seed) => {
+    const { report } = await solveInstance(definition, randomInstance(seed), 'total-degree');
+    expect(report.solutions).toHaveLength(2);
+    expect(report.stats).toMatchObject({ tracked: 4, regular: 2, singular: 0, atInfinity: 2, failed: 0 });
+  });
+
+  it.each(seeds(20))('random complex instance %i, two-homogeneous: 2 paths, both transversals', async (seed) => {
+    const { report } = await solveInstance(definition, randomInstance(seed), 'multihomogeneous');
+    expect(report.multihomogeneousBound).toBe(2);
+    expect(report.solutions).toHaveLength(2);
+    expect(report.stats).toMatchObject({ tracked: 2, regular: 2, failed: 0 });
+  });
+
+  it('the four wires: 2 real rods', async () => {
+    const { report, real } = await solveInstance(definition, demoInstance(definition, 'four-wires'));
+    expect(report.solutions).toHaveLength(2);
+    expect(real).toBe(2);
   });
 });

@@ -36,3 +36,12 @@ export function demoInstance(definition: ProblemDefinition, id: string): Instanc
   if (!instance) throw new Error(`${definition.slug}: no instance "${id}"`);
   return instance;
 }
+
+/**
+ * Splits test seeds into those checked strictly and those that currently fail through a known engine issue,
+ * reported to the engine's owner with the seed as a minimal failing case; the latter run as skipped tests so the
+ * gap stays visible in every test report.
+ */
+export function splitSeeds(all: readonly number[], engineIssues: readonly number[] = []): { checked: number[]; skipped: number[] } {
+  return { checked: all.filter((s) => !engineIssues.includes(s)), skipped: all.filter((s) => engineIssues.includes(s)) };
+}

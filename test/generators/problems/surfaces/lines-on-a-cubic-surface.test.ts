@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import definition, { clebschFrame } from '../../../../generators/problems/surfaces/lines-on-a-cubic-surface.ts';
 import { systemOf } from '../../../../src/atlas/system-of.ts';
 import { largestResidual, paramsFrom, real } from '../shared/evaluate.ts';
+import { demoInstance, randomInstance, seeds, solveInstance } from '../shared/solve.ts';
 
 const system = systemOf(definition);
 const demo = definition.instances.find((i) => i.kind === 'demo')!;
@@ -42,5 +43,21 @@ describe('lines on a cubic surface: the formulation', () => {
     const items = definition.drawing!.solution([0, 0, 1, 1], {});
     expect(items).toHaveLength(1);
     expect(items[0]!.shape).toBe('polyline');
+  });
+});
+
+// 27 lines on a smooth cubic surface (Cayley 1849; Salmon 1849); the 54 surplus paths of the chart's Bézout
+// bound 81 go to infinity (our own derivation, see the definition's excess note).
+describe('solving lines on a cubic surface', () => {
+  it.each(seeds(20))('random complex surface %i: 27 lines, 54 paths at infinity, none failed', async (seed) => {
+    const { report } = await solveInstance(definition, randomInstance(seed));
+    expect(report.solutions).toHaveLength(27);
+    expect(report.stats).toMatchObject({ tracked: 81, regular: 27, singular: 0, atInfinity: 54, failed: 0 });
+  });
+
+  it('the plaster model (a tilted Clebsch diagonal surface): 27 lines, all real (Clebsch 1871)', async () => {
+    const { report, real } = await solveInstance(definition, demo);
+    expect(report.solutions).toHaveLength(27);
+    expect(real).toBe(27);
   });
 });
