@@ -1,5 +1,6 @@
 // Client-side only: the <plane-figure> custom element. The SVG inside is complete without JavaScript; this adds
-// pan/zoom (d3-zoom on the <svg>, transform on g.viewport), layer toggle buttons, and data-ready when hydrated.
+// pan/zoom (d3-zoom on the <svg>, transform on g.viewport), layer toggle buttons, a shared highlight between a
+// solution's drawn items and its row in the table named by data-table, and data-ready when hydrated.
 import { select } from 'd3-selection';
 import { zoom, zoomIdentity, type ZoomBehavior } from 'd3-zoom';
 
@@ -26,8 +27,26 @@ class PlaneFigure extends HTMLElement {
     this.querySelector<HTMLButtonElement>('button[data-reset-view]')?.addEventListener('click', () => {
       if (this.#zoom) select(svg).call(this.#zoom.transform, zoomIdentity);
     });
+    this.#linkTable(svg);
     this.querySelector<HTMLElement>('.figure-tools')?.removeAttribute('hidden');
     this.setAttribute('data-ready', '');
+  }
+
+  #linkTable(svg: SVGSVGElement): void {
+    const table = this.dataset.table ? document.getElementById(this.dataset.table) : null;
+    const focus = (index: string | null) => {
+      for (const el of [...this.querySelectorAll('.is-focus'), ...(table?.querySelectorAll('.is-focus') ?? [])]) el.classList.remove('is-focus');
+      if (index === null) return;
+      const sel = CSS.escape(index);
+      for (const el of this.querySelectorAll(`[data-solution="${sel}"]`)) el.classList.add('is-focus');
+      table?.querySelector(`tr[data-solution-row="${sel}"]`)?.classList.add('is-focus');
+    };
+    svg.addEventListener('pointerover', (e) => focus((e.target as Element).closest('[data-solution]')?.getAttribute('data-solution') ?? null));
+    svg.addEventListener('pointerleave', () => focus(null));
+    for (const row of table?.querySelectorAll<HTMLTableRowElement>('tr[data-solution-row]') ?? []) {
+      row.addEventListener('pointerenter', () => focus(row.dataset.solutionRow ?? null));
+      row.addEventListener('pointerleave', () => focus(null));
+    }
   }
 
   #toggle(button: HTMLButtonElement): void {

@@ -115,6 +115,17 @@ describe('problem page', () => {
     await page.close();
   });
 
+  it('highlights a solution in the figure while its table row is under the pointer', async () => {
+    const page = await open(await apolloniusPath());
+    await page.waitForSelector('plane-figure[data-ready]');
+    const fig = page.locator('plane-figure').first();
+    const tableId = await fig.getAttribute('data-table');
+    await page.locator(`#${tableId} tr[data-solution-row="2"]`).hover();
+    expect(await fig.locator('[data-layer="solution"].is-focus').evaluateAll((els) => els.map((e) => e.getAttribute('data-solution'))))
+      .toEqual(['2']);
+    await page.close();
+  });
+
   it('offers a JSON download that parses and matches the solutions table', async () => {
     const page = await open(await apolloniusPath());
     const href = await page.locator('a[href$="solutions.json"]').getAttribute('href');
