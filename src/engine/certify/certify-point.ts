@@ -49,12 +49,12 @@ export function createPointCertifier(system: CertifiableSystem, options: PointCe
    * Starting half-widths per coordinate: 2·(|Δx_j| + (|Y|·|F(m)|)_j) with F(m) in interval arithmetic (so its rounding
    * noise counts), at least 2⁻⁴⁴(1 + |m_j|). A heuristic: it decides where to look, not what is proven.
    */
-  const startRadii = (): void => {
+  const startRadii = (exact: boolean): void => {
     for (let j = 0; j < n; j++) {
       centreBox[4 * j] = centreBox[4 * j + 1] = centre[2 * j]!;
       centreBox[4 * j + 2] = centreBox[4 * j + 3] = centre[2 * j + 1]!;
     }
-    system.intervalValues(centreBox, centreValues);
+    if (exact) system.exactValues(centre, centreValues); else system.intervalValues(centreBox, centreValues);
     for (let i = 0; i < n; i++) {
       let row = 0;
       for (let k = 0; k < n; k++) {
@@ -72,8 +72,7 @@ export function createPointCertifier(system: CertifiableSystem, options: PointCe
    * the deviation of K(X) in that coordinate after a failure (ε-inflation). When real, the centre's imaginary parts are
    * set to 0 and each imaginary interval is exactly [−r_j, r_j]. Returns the largest radius on success, else 0.
    */
-  const inflate = (real: boolean, limit: number): number => {
-    if (real) for (let j = 0; j < n; j++) centre[2 * j + 1] = 0;
+  const inflate = (real: boolean, limit: number, exact: boolean): number => {
     for (let a = 0; a < attempts; a++) {
       let largest = 0;
       for (let j = 0; j < n; j++) {
@@ -83,7 +82,7 @@ export function createPointCertifier(system: CertifiableSystem, options: PointCe
         box[4 * j + 2] = real ? -r : widenDown(mi - r); box[4 * j + 3] = real ? r : widenUp(mi + r);
       }
       if (!(largest <= limit)) return 0;
-      if (tester.test(box, centre, inverse)) return largest;
+      if (tester.test(box, centre, inverse, exact ? centreValues : undefined)) return largest;
       const k = tester.enclosure;
       for (let j = 0; j < n; j++) {
         const mr = centre[2 * j]!, mi = centre[2 * j + 1]!;
@@ -93,6 +92,25 @@ export function createPointCertifier(system: CertifiableSystem, options: PointCe
       }
     }
     return 0;
+  };
+
+  /**
+   * Fallback for ill-conditioned solutions: Newton steps m ← m − J(m)⁻¹F(m) with F(m) evaluated exactly (so the
+   * residual is not drowned in rounding noise), a fresh Y = J(m)⁻¹, and F(m) enclosed exactly in the test.
+   * False when the Jacobian turns singular.
+   */
+  const refine = (real: boolean): boolean => {
+    for (let iteration = 0; iteration < 3; iteration++) {
+      if (real) for (let j = 0; j < n; j++) centre[2 * j + 1] = 0;
+      system.pointJacobian(centre, f0, j0);
+      if (!invertComplex(j0, n, inverse)) return false;
+      if (iteration === 2) break;
+      system.exactValues(centre, centreValues);
+      for (let k = 0; k < 2 * n; k++) f0[k] = 0.5 * centreValues[2 * k]! + 0.5 * centreValues[2 * k + 1]!;
+      multiplyComplex(inverse, f0, n, step);
+      for (let k = 0; k < 2 * n; k++) centre[k] = centre[k]! - step[k]!;
+    }
+    return true;
   };
 
   /** Krawczyk's test on the given box (4n) around its midpoint, once, with Y from the midpoint: true proves one zero. */
@@ -121,16 +139,20 @@ export function createPointCertifier(system: CertifiableSystem, options: PointCe
     for (let k = 0; k < 2 * n; k++) centre[k] = x[k]! - step[k]!;
     let imaginary = 0;
     for (let j = 0; j < n; j++) imaginary = Math.max(imaginary, Math.abs(centre[2 * j + 1]!));
-    if (real && imaginary <= limit) {
-      startRadii();
-      for (let j = 0; j < n; j++) radii[j] = Math.max(radii[j]!, 2 * Math.abs(centre[2 * j + 1]!));
-      const r = inflate(true, limit);
-      if (r > 0) return { certified: true, certifiedReal: true, box: box.slice(), radius: r };
-      for (let k = 0; k < 2 * n; k++) centre[k] = x[k]! - step[k]!;
+    const realFirst = real && imaginary <= limit;
+    const newtonCentre = x.map((v, k) => v - step[k]!);
+    // double-precision interval evaluation first; exact evaluation of F(m) only where that fails
+    for (const exact of [false, true]) {
+      for (const realBox of realFirst ? [true, false] : [false]) {
+        centre.set(newtonCentre);
+        if (exact && !refine(realBox)) continue;
+        if (realBox) for (let j = 0; j < n; j++) centre[2 * j + 1] = 0;
+        startRadii(exact);
+        if (realBox) for (let j = 0; j < n; j++) radii[j] = Math.max(radii[j]!, 2 * Math.abs(newtonCentre[2 * j + 1]!));
+        const r = inflate(realBox, limit, exact);
+        if (r > 0) return { certified: true, certifiedReal: realBox, box: box.slice(), radius: r };
+      }
     }
-    startRadii();
-    const r = inflate(false, limit);
-    if (r > 0) return { certified: true, certifiedReal: false, box: box.slice(), radius: r };
     return fail(`Krawczyk's test failed on every box tried, up to half-width ${limit.toExponential(2)} (near-singular or clustered solution)`);
   };
   return { point, hull };

@@ -1,5 +1,6 @@
 import type { PolynomialSystem } from '../expr/node.ts';
 import { compileChunks, intervalHelpers, intervalLine, pointLine, type Kernel } from './emit-interval.ts';
+import { exactValues } from './exact-values.ts';
 import { lowerSystem, type SlotRef } from './straight-line.ts';
 
 /**
@@ -20,6 +21,8 @@ export interface CertifiableSystem {
   intervalValues(box: Float64Array, values: Float64Array): void;
   /** Interval values F(X) into values (4n) and Jacobian J(X) into jacobian (4n², row-major). */
   intervalJacobian(box: Float64Array, values: Float64Array, jacobian: Float64Array): void;
+  /** An enclosure (4n, one to a few floats wide) of the exact F(x) at a point of doubles; slow (BigInt), for fallbacks. */
+  exactValues(x: Float64Array, values: Float64Array): void;
   /** Floating-point F(x) into values (2n) and J(x) into jacobian (2n², row-major); x packed complex. */
   pointJacobian(x: Float64Array, values: Float64Array, jacobian: Float64Array): void;
 }
@@ -83,6 +86,9 @@ export function compileCertifiableSystem(system: PolynomialSystem): CertifiableS
       run(jacobianKernels, ib, box);
       copyOut(program.values, 4, ib, values);
       copyOut(program.jacobian, 4, ib, jacobian);
+    },
+    exactValues(x, values) {
+      exactValues(program, pb, x, values);
     },
     pointJacobian(x, values, jacobian) {
       run(pointKernels, pb, x);

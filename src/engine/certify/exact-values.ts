@@ -30,7 +30,7 @@ function dyadicOf(x: number): Dyadic {
 function powerOfTwo(k: number): number {
   if (k >= -1022) { u32[HI] = (k + 1023) << 20; u32[LO] = 0; return f64[0]!; }
   const shift = k + 1074; // subnormal: a single fraction bit
-  if (shift >= 32) { u32[HI] = 1 << (shift - 32); u32[LO] = 0; } else { u32[HI] = 0; u32[LO] = (2 ** shift) >>> 0; }
+  if (shift >= 32) { u32[HI] = 1 << (shift - 32); u32[LO] = 0; } else { u32[HI] = 0; u32[LO] = (1 << shift) >>> 0; }
   return f64[0]!;
 }
 

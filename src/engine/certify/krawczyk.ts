@@ -11,8 +11,11 @@ import type { CertifiableSystem } from './compiled-system.ts';
  * a-priori rounding bound (dot-bound.ts), which is sound and an order of magnitude cheaper than widening every term. Buffers are made once per size; a test allocates nothing.
  */
 export interface KrawczykTester {
-  /** Runs the test; K(X) is left in `enclosure` (4n). X is 4n rectangles, m and Y packed complex (2n, 2n²). */
-  test(box: Float64Array, centre: Float64Array, inverse: Float64Array): boolean;
+  /**
+   * Runs the test; K(X) is left in `enclosure` (4n). X is 4n rectangles, m and Y packed complex (2n, 2n²); an
+   * enclosure of F(m) (4n) may be given (e.g. from exact evaluation), else it is computed in interval arithmetic.
+   */
+  test(box: Float64Array, centre: Float64Array, inverse: Float64Array, centreValues?: Float64Array): boolean;
   readonly enclosure: Float64Array;
 }
 
@@ -37,7 +40,7 @@ export function createKrawczykTester(system: CertifiableSystem): KrawczykTester 
   }
   const columnRows = Int32Array.from(rows);
 
-  const test = (box: Float64Array, centre: Float64Array, inverse: Float64Array): boolean => {
+  const test = (box: Float64Array, centre: Float64Array, inverse: Float64Array, centreValues?: Float64Array): boolean => {
     for (let j = 0; j < n; j++) {
       const mr = centre[2 * j]!, mi = centre[2 * j + 1]!;
       centreBox[4 * j] = mr; centreBox[4 * j + 1] = mr; centreBox[4 * j + 2] = mi; centreBox[4 * j + 3] = mi;
@@ -46,7 +49,7 @@ export function createKrawczykTester(system: CertifiableSystem): KrawczykTester 
       offset[4 * j + 2] = widenDown(box[4 * j + 2]! - mi);
       offset[4 * j + 3] = widenUp(box[4 * j + 3]! - mi);
     }
-    system.intervalValues(centreBox, fm);
+    if (centreValues) fm.set(centreValues); else system.intervalValues(centreBox, fm);
     system.intervalJacobian(box, fx, jx);
     for (let e = 0; e < n * n; e++) {
       midRadius(jx[4 * e]!, jx[4 * e + 1]!, work, 0);

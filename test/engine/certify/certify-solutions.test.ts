@@ -94,6 +94,15 @@ describe('certifying solutions', () => {
     expect(report.solutions[0]!.reason).toBeTruthy();
   });
 
+  it('separates two regular roots 1e-11 apart, which double-precision residuals cannot (exact residual fallback)', () => {
+    // x² − (1 + c)x + c = 0 with c = 1 + 1e-11 (as a double), and y = 0: roots near (1, 0) and (c, 0)
+    const close = 1 + 1e-11;
+    const system: PolynomialSystem = { unknowns: ['x', 'y'], parameters: [], equations: [add(sub(pow(x, 2), mul(1 + close, x)), close), y] };
+    const report = certifySolutions(system, new Float64Array(0), [pack(1, 0, 0, 0), pack(close, 0, 0, 0)]);
+    expect([report.certified, report.certifiedDistinct, report.certifiedReal]).toEqual([2, 2, 2]);
+    for (const solution of report.solutions) expect(solution.radius).toBeLessThan(5e-12);
+  });
+
   it('never calls a solution real when the system has complex constants (random complex chart)', () => {
     // (1 + i)(x − 2) = 0, y² = 4 (y = 2 given): the solution (2, 2) is real, but the system is not
     const system: PolynomialSystem = { unknowns: ['x', 'y'], parameters: [], equations: [mul(constant(1, 1), sub(x, 2)), sub(pow(y, 2), 4)] };
