@@ -44,6 +44,19 @@ describe('refresh', () => {
   });
 });
 
+describe('check', () => {
+  it('passes fresh content, and notes a stale record without failing', async () => {
+    const w = workspace();
+    await runCommand(['refresh', '--content', w.content], fakeContext({ problemsDir: w.problems }).ctx);
+    const fresh = fakeContext({ problemsDir: w.problems });
+    expect(await runCommand(['check', '--content', w.content], fresh.ctx)).toBe(0);
+    expect(fresh.stderr.text).toMatch(/check: 1 records, 0 content problems; 1 definitions\n$/);
+    const later = fakeContext({ problemsDir: w.problems, engine: () => fakeEngine({ version: 'fake-9' }) });
+    expect(await runCommand(['check', '--content', w.content], later.ctx)).toBe(0);
+    expect(later.stderr.text).toMatch(/note: two-test-conics: stale \(engine fake-1 → fake-9\)/);
+  });
+});
+
 describe('regenerate', () => {
   it('refuses a worse result with exit 1 and says why, then accepts it with --force', async () => {
     const w = workspace();
