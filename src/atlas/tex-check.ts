@@ -2,8 +2,9 @@ import katex from 'katex';
 import type { ValidationIssue } from './validation-issue.ts';
 
 /**
- * Checks every $…$ and $$…$$ formula of a Markdown text with KaTeX (throwOnError), and that no dollar sign is left
- * unclosed (write \$ for a literal dollar). Returns one issue per bad formula, naming the field path.
+ * Checks every $…$ and $$…$$ formula of a Markdown text with KaTeX (throwOnError, strict: 'error', as the site
+ * renders), and that no dollar sign is left unclosed (write \$ for a literal dollar). Returns one issue per bad
+ * formula, naming the field path.
  */
 export function texIssues(text: string, path: string): ValidationIssue[] {
   const issues: ValidationIssue[] = [];
@@ -13,7 +14,7 @@ export function texIssues(text: string, path: string): ValidationIssue[] {
       continue;
     }
     try {
-      katex.renderToString(segment.tex, { throwOnError: true, displayMode: segment.display, strict: 'ignore' });
+      katex.renderToString(segment.tex, { throwOnError: true, displayMode: segment.display, strict: 'error' });
     } catch (error) {
       issues.push({ path, message: `TeX error in $${segment.tex}$: ${firstLine(error)}` });
     }

@@ -17,6 +17,7 @@ describe('checking TeX with KaTeX', () => {
     ['an unbalanced brace', 'oops $\\frac{1}{$', 1],
     ['an unknown command', 'see $\\notacommand x$', 1],
     ['an unclosed dollar', 'a $x', 1],
+    ['accented text in math, which the site renders in strict mode and refuses', 'the letter $é$', 1],
   ])('%s gives %i issues', (_name, text, count) => {
     const issues = texIssues(text, 'statement');
     expect(issues).toHaveLength(count);
