@@ -1,8 +1,8 @@
 import { mathSegments } from '../../src/atlas/tex-check.ts';
 
 /**
- * Markdown prose made safe for MDX: outside $…$ / $$…$$ math, `{`, `}` and `<` get a backslash (MDX would read them
- * as expressions or JSX); math is kept byte for byte. Line endings become \n and outer blank space is trimmed.
+ * Markdown prose made safe for MDX: outside $…$ / $$…$$ math and `code` spans, `{`, `}` and `<` get a backslash
+ * (MDX would read them as expressions or JSX); math and code are kept byte for byte. Line endings become \n and outer blank space is trimmed.
  */
 export function mdxText(markdown: string): string {
   const text = markdown.replace(/\r\n?/g, '\n').trim();
@@ -16,5 +16,5 @@ export function mdxText(markdown: string): string {
 }
 
 function escapeProse(prose: string): string {
-  return prose.replace(/\\.|[{}<]/g, (m) => (m.length === 2 ? m : `\\${m}`));
+  return prose.replace(/`[^`\n]*`|\\.|[{}<]/g, (m) => (m.length >= 2 ? m : `\\${m}`));
 }
