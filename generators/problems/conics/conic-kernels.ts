@@ -17,6 +17,14 @@ export function conicTimesPoint(C: Float64Array, co: number, P: Float64Array, po
   out[oo + 5] = dr * xi + di * xr + er * yi + ei * yr + fr * zi + fi * zr;
 }
 
+/** out[oo], out[oo + 1] = a·b, the bilinear dot product of two packed complex 3-vectors. */
+export function dot3(a: Float64Array, ao: number, b: Float64Array, bo: number, out: Float64Array, oo: number): void {
+  const a0r = a[ao]!, a0i = a[ao + 1]!, a1r = a[ao + 2]!, a1i = a[ao + 3]!, a2r = a[ao + 4]!, a2i = a[ao + 5]!;
+  const b0r = b[bo]!, b0i = b[bo + 1]!, b1r = b[bo + 2]!, b1i = b[bo + 3]!, b2r = b[bo + 4]!, b2i = b[bo + 5]!;
+  out[oo] = a0r * b0r - a0i * b0i + a1r * b1r - a1i * b1i + a2r * b2r - a2i * b2i;
+  out[oo + 1] = a0r * b0i + a0i * b0r + a1r * b1i + a1i * b1r + a2r * b2i + a2i * b2r;
+}
+
 /** Real part of the bilinear dot product of two packed complex 3-vectors. */
 export function dot3Re(a: Float64Array, ao: number, b: Float64Array, bo: number): number {
   return a[ao]! * b[bo]! - a[ao + 1]! * b[bo + 1]! + a[ao + 2]! * b[bo + 2]! - a[ao + 3]! * b[bo + 3]! + a[ao + 4]! * b[bo + 4]! - a[ao + 5]! * b[bo + 5]!;

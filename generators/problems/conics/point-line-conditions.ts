@@ -11,11 +11,13 @@ export const characteristicNumbers: Readonly<Record<number, number>> = { 5: 1, 4
 const coefficients = ['a', 'b', 'c', 'd', 'e', 'f'] as const;
 
 /**
- * A fixed complex affine chart of the projective space of conics: the solution is scaled so that Σ hₖ·coefₖ = 1.
- * The numbers are our own arbitrary choice, far from any special hyperplane; being complex, the chart's
- * hyperplane at infinity contains no real conic, so no real solution is lost at infinity.
+ * The affine chart of the projective space of conics, Σ hₖ·coefₖ = 1, is part of each instance: the generic
+ * instance draws h at random (complex, so no special position), and demos use these real numbers of our own, so
+ * that real conics get real chart coordinates (and can be certified real). None of the demo conics lies on the
+ * chart's hyperplane at infinity (checked by the tests: all are found).
  */
-const chart: readonly (readonly [number, number])[] = [[0.63, -0.41], [-0.28, 0.77], [0.52, 0.36], [-0.71, -0.19], [0.34, -0.58], [0.45, 0.62]];
+const demoChart = [0.31, -0.22, 0.27, 0.12, -0.17, 1] as const;
+const chartNames = coefficients.map((c) => `h${c}`);
 
 /** The scenario of a demo configuration: its points (x, y), lines (u, v, w) meaning ux + vy + w = 0, and words. */
 export interface PointLineDemo {
@@ -65,6 +67,7 @@ export function pointLineProblem(p: number, genericSeed: number, demo: PointLine
   const pointIndices = Array.from({ length: p }, (_, i) => i + 1);
   const lineIndices = Array.from({ length: l }, (_, j) => j + 1);
   const parameters: Record<string, ComplexInput> = {};
+  chartNames.forEach((n, m) => (parameters[n] = demoChart[m]!));
   demo.points.forEach(([x, y], i) => Object.assign(parameters, { [`x${i + 1}`]: x, [`y${i + 1}`]: y }));
   demo.lines.forEach(([u, v, w], j) => Object.assign(parameters, { [`u${j + 1}`]: u, [`v${j + 1}`]: v, [`w${j + 1}`]: w }));
   const configuration = (q: Readonly<Record<string, number>>): FigureItem[] => [
@@ -87,9 +90,9 @@ export function pointLineProblem(p: number, genericSeed: number, demo: PointLine
     ].filter(Boolean).join(' ').replace(' .', '.'),
     formulation: {
       unknowns: [...coefficients],
-      parameters: [...pointIndices.flatMap((i) => [`x${i}`, `y${i}`]), ...lineIndices.flatMap((j) => [`u${j}`, `v${j}`, `w${j}`])],
+      parameters: [...chartNames, ...pointIndices.flatMap((i) => [`x${i}`, `y${i}`]), ...lineIndices.flatMap((j) => [`u${j}`, `v${j}`, `w${j}`])],
       equations: (k, q, ops) => [
-        ops.sub(ops.add(...coefficients.map((name, m) => ops.mul(ops.constant(chart[m]![0], chart[m]![1]), k[name]!))), 1),
+        ops.sub(ops.add(...coefficients.map((name, m) => ops.mul(q[chartNames[m]!]!, k[name]!))), 1),
         ...pointIndices.map((i) => {
           const x = q[`x${i}`]!, y = q[`y${i}`]!;
           return ops.add(ops.mul(k.a!, ops.pow(x, 2)), ops.mul(k.b!, x, y), ops.mul(k.c!, ops.pow(y, 2)), ops.mul(k.d!, x), ops.mul(k.e!, y), k.f!);
@@ -97,7 +100,7 @@ export function pointLineProblem(p: number, genericSeed: number, demo: PointLine
         ...lineIndices.map((j) => tangencyQuadric(ops, k, q[`u${j}`]!, q[`v${j}`]!, q[`w${j}`]!)),
       ],
       description: [
-        'The six coefficients $(a, b, c, d, e, f)$ of the conic, a point of $\\mathbb{P}^5$, in a fixed random complex affine chart (one linear equation).',
+        'The six coefficients $(a, b, c, d, e, f)$ of the conic, a point of $\\mathbb{P}^5$, in the affine chart $h_a a + h_b b + \\dots + h_f f = 1$ (one linear equation; random complex $h$ for generic instances, fixed real $h$ for demos). Solutions are shown scaled so that their largest coefficient is $1$.',
         'Passing through a point is linear; tangency to the line $\\ell = (u, v, w)$ is the quadric $\\ell^{\\mathsf{T}} \\operatorname{adj}(M)\\, \\ell = 0$ in the conic matrix $M$,',
         `the discriminant of the conic restricted to the line. Bézout bound $2^{${l}} = ${bound}$.`,
       ].join(' '),

@@ -1,7 +1,7 @@
 import type { Homotopy } from '../../../src/engine/homotopy.ts';
 import { createArrowheadSolver } from '../../../src/engine/linalg/arrowhead-solver.ts';
 import { gammaArc } from '../../../src/engine/parameter/gamma-arc.ts';
-import { coefficientGradient, conicTimesPoint, cross3, dot3Im, dot3Re } from './conic-kernels.ts';
+import { coefficientGradient, conicTimesPoint, cross3, dot3 } from './conic-kernels.ts';
 import { chartCount, parameterCount, pointOf, tangencyArrowhead, unknownCount, type TangencyShape } from './tangency-layout.ts';
 
 /** Arguments of the worker-loadable homotopy: the shape, chart constants and one parameter leg (all packed complex). */
@@ -67,14 +67,14 @@ export function createHomotopy(args: TangencyHomotopyArgs): Homotopy {
       const row = 1 + j;
       P[0] = par[4 * j]!; P[1] = par[4 * j + 1]!; P[2] = par[4 * j + 2]!; P[3] = par[4 * j + 3]!; P[4] = 1; P[5] = 0;
       conicTimesPoint(x, 0, P, 0, UP, 0);
-      h[2 * row] = dot3Re(P, 0, UP, 0); h[2 * row + 1] = dot3Im(P, 0, UP, 0);
+      dot3(P, 0, UP, 0, h, 2 * row);
       if (jac !== null) {
         coefficientGradient(P, 0, P, 0, grad, 0);
         for (let c = 0; c < 12; c++) jac[2 * row * n + c] = grad[c]!;
       }
       if (ht !== null) {
         t1[0] = dpar[4 * j]!; t1[1] = dpar[4 * j + 1]!; t1[2] = dpar[4 * j + 2]!; t1[3] = dpar[4 * j + 3]!; t1[4] = 0; t1[5] = 0;
-        ht[2 * row] = 2 * dot3Re(t1, 0, UP, 0); ht[2 * row + 1] = 2 * dot3Im(t1, 0, UP, 0);
+        dot3(t1, 0, UP, 0, ht, 2 * row); ht[2 * row] *= 2; ht[2 * row + 1] *= 2;
       }
     }
     // Tangency blocks.
@@ -86,9 +86,9 @@ export function createHomotopy(args: TangencyHomotopyArgs): Homotopy {
       cross3(chart, co + 18, AP, 0, g, 0); // g = m × AP
       cross3(UP, 0, chart, co + 18, hv, 0); // hv = UP × m
       const r1 = 2 * row, r2 = 2 * (row + 1), r3 = 2 * (row + 2);
-      h[r1] = dot3Re(P, 0, AP, 0); h[r1 + 1] = dot3Im(P, 0, AP, 0);
-      h[r2] = dot3Re(P, 0, UP, 0); h[r2 + 1] = dot3Im(P, 0, UP, 0);
-      h[r3] = dot3Re(AP, 0, hv, 0); h[r3 + 1] = dot3Im(AP, 0, hv, 0);
+      dot3(P, 0, AP, 0, h, r1);
+      dot3(P, 0, UP, 0, h, r2);
+      dot3(AP, 0, hv, 0, h, r3);
       if (jac !== null) {
         const cs = 2 * (6 + 2 * i);
         // ∂E3/∂P = A·hv + U·g
@@ -97,9 +97,9 @@ export function createHomotopy(args: TangencyHomotopyArgs): Homotopy {
         for (let c = 0; c < 6; c++) t1[c] = t1[c]! + dAP[c]!;
         for (let d = 0; d < 2; d++) {
           const dir = co + 6 + 6 * d; // v, then w
-          jac[r1 * n + cs + 2 * d] = 2 * dot3Re(AP, 0, chart, dir); jac[r1 * n + cs + 2 * d + 1] = 2 * dot3Im(AP, 0, chart, dir);
-          jac[r2 * n + cs + 2 * d] = 2 * dot3Re(UP, 0, chart, dir); jac[r2 * n + cs + 2 * d + 1] = 2 * dot3Im(UP, 0, chart, dir);
-          jac[r3 * n + cs + 2 * d] = dot3Re(t1, 0, chart, dir); jac[r3 * n + cs + 2 * d + 1] = dot3Im(t1, 0, chart, dir);
+          dot3(AP, 0, chart, dir, jac, r1 * n + cs + 2 * d); jac[r1 * n + cs + 2 * d] *= 2; jac[r1 * n + cs + 2 * d + 1] *= 2;
+          dot3(UP, 0, chart, dir, jac, r2 * n + cs + 2 * d); jac[r2 * n + cs + 2 * d] *= 2; jac[r2 * n + cs + 2 * d + 1] *= 2;
+          dot3(t1, 0, chart, dir, jac, r3 * n + cs + 2 * d);
         }
         coefficientGradient(P, 0, P, 0, grad, 0);
         for (let c = 0; c < 12; c++) jac[r2 * n + c] = grad[c]!;
@@ -108,9 +108,9 @@ export function createHomotopy(args: TangencyHomotopyArgs): Homotopy {
       }
       if (ht !== null) {
         conicTimesPoint(dpar, po, P, 0, dAP, 0);
-        ht[r1] = dot3Re(P, 0, dAP, 0); ht[r1 + 1] = dot3Im(P, 0, dAP, 0);
+        dot3(P, 0, dAP, 0, ht, r1);
         ht[r2] = 0; ht[r2 + 1] = 0;
-        ht[r3] = dot3Re(dAP, 0, hv, 0); ht[r3 + 1] = dot3Im(dAP, 0, hv, 0);
+        dot3(dAP, 0, hv, 0, ht, r3);
       }
     }
   }

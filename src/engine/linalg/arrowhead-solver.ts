@@ -38,135 +38,144 @@ export function checkArrowheadLayout(layout: ArrowheadLayout): void {
 export function createArrowheadSolver(layout: ArrowheadLayout): LinearSolver {
   checkArrowheadLayout(layout);
   const { n, shared, blocks, border } = layout;
-  const s = shared.length;
-  const w = blocks.map((b) => b.unknowns.length + s); // row width of each block's work matrix
-  const work = blocks.map((b, i) => new Float64Array(2 * b.equations.length * w[i]!));
-  const perm = blocks.map((b) => new Int32Array(b.equations.length));
-  const rhs = blocks.map((b) => new Float64Array(2 * b.equations.length));
-  const schur = new Float64Array(2 * s * s);
-  const schurPerm = new Int32Array(s);
-  const schurRows: { block: number; row: number }[] = []; // where each Schur row comes from (block -1: border)
-  border.forEach((r) => schurRows.push({ block: -1, row: r }));
-  blocks.forEach((b, i) => {
-    for (let k = b.unknowns.length; k < b.equations.length; k++) schurRows.push({ block: i, row: k });
-  });
-  const xs = new Float64Array(2 * s);
-  const out2 = new Float64Array(2 * n);
+  const s = shared.length, nb = blocks.length;
+  // Flat per-block descriptions: rows r, private unknowns p, row width p + s, offsets into the flat buffers.
+  const R = Int32Array.from(blocks, (b) => b.equations.length), Pn = Int32Array.from(blocks, (b) => b.unknowns.length);
+  const W0 = new Int32Array(nb + 1), R0 = new Int32Array(nb + 1), P0 = new Int32Array(nb + 1);
+  for (let i = 0; i < nb; i++) { W0[i + 1] = W0[i]! + 2 * R[i]! * (Pn[i]! + s); R0[i + 1] = R0[i]! + R[i]!; P0[i + 1] = P0[i]! + Pn[i]!; }
+  const work = new Float64Array(W0[nb]!), rhs = new Float64Array(2 * R0[nb]!), perm = new Int32Array(R0[nb]!);
+  const eqs = Int32Array.from(blocks.flatMap((b) => b.equations)), privateCols = Int32Array.from(blocks.flatMap((b) => b.unknowns));
+  // gather[k]: offset in the packed matrix of the k-th complex entry of the work buffer, then of the border rows.
+  const gather = new Int32Array(W0[nb]! / 2 + border.length * s);
+  let g = 0;
+  blocks.forEach((b) => b.equations.forEach((row) => { for (const c of [...b.unknowns, ...shared]) gather[g++] = 2 * (row * n + c); }));
+  border.forEach((row) => { for (const c of shared) gather[g++] = 2 * (row * n + c); });
+  const schur = new Float64Array(2 * s * s), schurPerm = new Int32Array(s);
+  // Schur row i comes from work row schurSource[i] (an index of the flat rhs) or, when negative, border row −1 − k.
+  const schurSource = new Int32Array(s);
+  let q = 0;
+  border.forEach((row) => { schurSource[q++] = -1 - row; });
+  blocks.forEach((b, i) => { for (let k = b.unknowns.length; k < b.equations.length; k++) schurSource[q++] = R0[i]! + k; });
+  const xs = new Float64Array(2 * s), out2 = new Float64Array(2 * n);
+  const sharedIdx = Int32Array.from(shared);
 
   return {
     factor(a) {
-      let minPivot = Infinity;
-      let norm = 0;
-      for (let bi = 0; bi < blocks.length; bi++) {
-        const b = blocks[bi]!;
-        const W = work[bi]!, P = perm[bi]!, width = w[bi]!, r = b.equations.length, p = b.unknowns.length;
-        for (let i = 0; i < r; i++) {
-          const row = b.equations[i]!;
-          P[i] = i;
-          for (let j = 0; j < p; j++) copy(a, 2 * (row * n + b.unknowns[j]!), W, 2 * (i * width + j));
-          for (let j = 0; j < s; j++) copy(a, 2 * (row * n + shared[j]!), W, 2 * (i * width + p + j));
-          const rowSum = absSum(W, 2 * i * width, width);
+      let minPivot = Infinity, norm = 0, k = 0;
+      for (let bi = 0; bi < nb; bi++) {
+        const width = Pn[bi]! + s, base = W0[bi]!;
+        for (let i = 0; i < R[bi]!; i++) {
+          perm[R0[bi]! + i] = i;
+          let rowSum = 0;
+          for (let j = 0; j < width; j++, k++) {
+            const src = gather[k]!, re = a[src]!, im = a[src + 1]!;
+            work[base + 2 * (i * width + j)] = re;
+            work[base + 2 * (i * width + j) + 1] = im;
+            rowSum += Math.abs(re) + Math.abs(im);
+          }
           if (rowSum > norm) norm = rowSum;
         }
-        const piv = eliminate(W, P, r, p, width);
+        const piv = eliminate(work, base, perm, R0[bi]!, R[bi]!, Pn[bi]!, width);
         if (piv < minPivot) minPivot = piv;
       }
+      let border0 = k;
       for (let i = 0; i < s; i++) {
-        const src = schurRows[i]!;
-        if (src.block < 0) {
-          for (let j = 0; j < s; j++) copy(a, 2 * (src.row * n + shared[j]!), schur, 2 * (i * s + j));
-          const rowSum = absSum(schur, 2 * i * s, s);
+        const src = schurSource[i]!;
+        if (src < 0) {
+          let rowSum = 0;
+          for (let j = 0; j < s; j++, border0++) {
+            const o = gather[border0]!, re = a[o]!, im = a[o + 1]!;
+            schur[2 * (i * s + j)] = re;
+            schur[2 * (i * s + j) + 1] = im;
+            rowSum += Math.abs(re) + Math.abs(im);
+          }
           if (rowSum > norm) norm = rowSum;
         } else {
-          const W = work[src.block]!, width = w[src.block]!, p = blocks[src.block]!.unknowns.length;
-          for (let j = 0; j < s; j++) copy(W, 2 * (src.row * width + p + j), schur, 2 * (i * s + j));
+          const bi = blockOf(R0, src), width = Pn[bi]! + s, o = W0[bi]! + 2 * ((src - R0[bi]!) * width + Pn[bi]!);
+          for (let j = 0; j < 2 * s; j++) schur[2 * i * s + j] = work[o + j]!;
         }
       }
       for (let i = 0; i < s; i++) schurPerm[i] = i;
-      const piv = eliminate(schur, schurPerm, s, s, s);
+      const piv = eliminate(schur, 0, schurPerm, 0, s, s, s);
       if (piv < minPivot) minPivot = piv;
       return minPivot === 0 || !Number.isFinite(minPivot) ? Infinity : norm / minPivot;
     },
     solve(b, out) {
-      for (let bi = 0; bi < blocks.length; bi++) {
-        const blk = blocks[bi]!, R = rhs[bi]!, P = perm[bi]!, W = work[bi]!, width = w[bi]!;
-        const r = blk.equations.length, p = blk.unknowns.length;
-        for (let i = 0; i < r; i++) copy(b, 2 * blk.equations[P[i]!]!, R, 2 * i);
-        forward(W, R, r, p, width);
+      for (let bi = 0; bi < nb; bi++) {
+        const r0 = R0[bi]!;
+        for (let i = 0; i < R[bi]!; i++) copy(b, 2 * eqs[r0 + perm[r0 + i]!]!, rhs, 2 * (r0 + i));
+        forward(work, W0[bi]!, rhs, 2 * r0, R[bi]!, Pn[bi]!, Pn[bi]! + s);
       }
       for (let i = 0; i < s; i++) {
-        const src = schurRows[i]!;
-        copy(src.block < 0 ? b : rhs[src.block]!, 2 * src.row, xs, 2 * i);
+        const src = schurSource[i]!;
+        if (src < 0) copy(b, 2 * (-1 - src), out2, 2 * i);
+        else copy(rhs, 2 * src, out2, 2 * i);
       }
-      // Schur rows from blocks were permuted within the block already; border rows are raw.
-      permuteInPlace(xs, schurPerm, s, out2);
-      forward(schur, xs, s, s, s);
-      backward(schur, xs, s, s, 0, 0, null);
-      for (let bi = 0; bi < blocks.length; bi++) {
-        const blk = blocks[bi]!, R = rhs[bi]!, W = work[bi]!, width = w[bi]!, p = blk.unknowns.length;
-        backward(W, R, p, width, p, s, xs);
-        for (let j = 0; j < p; j++) copy(R, 2 * j, out2, 2 * blk.unknowns[j]!);
+      for (let i = 0; i < s; i++) copy(out2, 2 * schurPerm[i]!, xs, 2 * i);
+      forward(schur, 0, xs, 0, s, s, s);
+      backward(schur, 0, xs, 0, s, s, 0, 0, null);
+      for (let bi = 0; bi < nb; bi++) {
+        const r0 = R0[bi]!, p = Pn[bi]!;
+        backward(work, W0[bi]!, rhs, 2 * r0, p, p + s, p, s, xs);
+        for (let j = 0; j < p; j++) copy(rhs, 2 * (r0 + j), out2, 2 * privateCols[P0[bi]! + j]!);
       }
-      for (let j = 0; j < s; j++) copy(xs, 2 * j, out2, 2 * shared[j]!);
+      for (let j = 0; j < s; j++) copy(xs, 2 * j, out2, 2 * sharedIdx[j]!);
       for (let i = 0; i < 2 * n; i++) out[i] = out2[i]!;
     },
   };
 }
 
-/** Σ (|re| + |im|) over m complex entries from offset o: the row's 1-norm within a factor √2. */
-function absSum(v: Float64Array, o: number, m: number): number {
-  let sum = 0;
-  for (let j = 0; j < 2 * m; j++) sum += Math.abs(v[o + j]!);
-  return sum;
+/** The block whose flat row range [R0[i], R0[i+1]) holds row index `row`. */
+function blockOf(R0: Int32Array, row: number): number {
+  let i = 0;
+  while (R0[i + 1]! <= row) i++;
+  return i;
 }
+
+
 
 function copy(from: Float64Array, i: number, to: Float64Array, j: number): void {
   to[j] = from[i]!;
   to[j + 1] = from[i + 1]!;
 }
 
-/** Applies a row permutation (row i of the result is row perm[i] of v) using `tmp` as scratch. */
-function permuteInPlace(v: Float64Array, perm: Int32Array, m: number, tmp: Float64Array): void {
-  for (let i = 0; i < m; i++) copy(v, 2 * perm[i]!, tmp, 2 * i);
-  for (let i = 0; i < 2 * m; i++) v[i] = tmp[i]!;
-}
 
 /**
- * Gaussian elimination with partial pivoting on the first `cols` columns of an r×width complex matrix, carrying the
- * remaining columns along; multipliers are stored below the diagonal and row swaps in perm. Returns the smallest
- * pivot modulus (0 for a zero pivot).
+ * Gaussian elimination with partial pivoting on the first `cols` columns of an r×width complex matrix stored from
+ * offset `base`, carrying the remaining columns along; multipliers are stored below the diagonal and row swaps in
+ * perm[p0 ..]. Returns the smallest pivot modulus (0 for a zero pivot).
  */
-function eliminate(W: Float64Array, perm: Int32Array, r: number, cols: number, width: number): number {
+function eliminate(W: Float64Array, base: number, perm: Int32Array, p0: number, r: number, cols: number, width: number): number {
   let minPivot = Infinity;
   for (let k = 0; k < cols; k++) {
     let best = k, bestAbs = -1;
     for (let i = k; i < r; i++) {
-      const re = W[2 * (i * width + k)]!, im = W[2 * (i * width + k) + 1]!;
+      const re = W[base + 2 * (i * width + k)]!, im = W[base + 2 * (i * width + k) + 1]!;
       const m = re * re + im * im;
       if (m > bestAbs) { bestAbs = m; best = i; }
     }
     if (best !== k) {
       for (let j = 0; j < 2 * width; j++) {
-        const t = W[2 * k * width + j]!;
-        W[2 * k * width + j] = W[2 * best * width + j]!;
-        W[2 * best * width + j] = t;
+        const t = W[base + 2 * k * width + j]!;
+        W[base + 2 * k * width + j] = W[base + 2 * best * width + j]!;
+        W[base + 2 * best * width + j] = t;
       }
-      const t = perm[k]!; perm[k] = perm[best]!; perm[best] = t;
+      const t = perm[p0 + k]!; perm[p0 + k] = perm[p0 + best]!; perm[p0 + best] = t;
     }
-    const pr = W[2 * (k * width + k)]!, pi = W[2 * (k * width + k) + 1]!;
+    const pr = W[base + 2 * (k * width + k)]!, pi = W[base + 2 * (k * width + k) + 1]!;
     const d = pr * pr + pi * pi;
     const abs = Math.sqrt(d);
     if (abs < minPivot) minPivot = abs;
     if (d === 0) return 0;
     const ir = pr / d, ii = -pi / d;
     for (let i = k + 1; i < r; i++) {
-      const o = 2 * (i * width + k);
+      const o = base + 2 * (i * width + k);
       const ar = W[o]!, ai = W[o + 1]!;
       const lr = ar * ir - ai * ii, li = ar * ii + ai * ir;
       W[o] = lr; W[o + 1] = li;
       if (lr === 0 && li === 0) continue;
       for (let j = k + 1; j < width; j++) {
-        const q = 2 * (k * width + j), t = 2 * (i * width + j);
+        const q = base + 2 * (k * width + j), t = base + 2 * (i * width + j);
         const br = W[q]!, bi = W[q + 1]!;
         W[t] = W[t]! - (lr * br - li * bi);
         W[t + 1] = W[t + 1]! - (lr * bi + li * br);
@@ -176,43 +185,43 @@ function eliminate(W: Float64Array, perm: Int32Array, r: number, cols: number, w
   return minPivot;
 }
 
-/** Applies the stored multipliers of the first `cols` eliminations to an (already permuted) right-hand side. */
-function forward(W: Float64Array, R: Float64Array, r: number, cols: number, width: number): void {
+/** Applies the stored multipliers of the first `cols` eliminations to an (already permuted) right-hand side at R[ro ..]. */
+function forward(W: Float64Array, base: number, R: Float64Array, ro: number, r: number, cols: number, width: number): void {
   for (let k = 0; k < cols; k++) {
-    const xr = R[2 * k]!, xi = R[2 * k + 1]!;
+    const xr = R[ro + 2 * k]!, xi = R[ro + 2 * k + 1]!;
     for (let i = k + 1; i < r; i++) {
-      const o = 2 * (i * width + k);
+      const o = base + 2 * (i * width + k);
       const lr = W[o]!, li = W[o + 1]!;
-      R[2 * i] = R[2 * i]! - (lr * xr - li * xi);
-      R[2 * i + 1] = R[2 * i + 1]! - (lr * xi + li * xr);
+      R[ro + 2 * i] = R[ro + 2 * i]! - (lr * xr - li * xi);
+      R[ro + 2 * i + 1] = R[ro + 2 * i + 1]! - (lr * xi + li * xr);
     }
   }
 }
 
 /**
- * Back substitution for the m×m upper triangle (columns 0..m-1) of W, after moving the known trailing unknowns
- * (columns off..off+extra-1 of W, values `known`) to the right-hand side. Solution overwrites R[0..m-1].
+ * Back substitution for the m×m upper triangle (columns 0..m-1) of W (from `base`), after moving the known trailing
+ * unknowns (columns off..off+extra-1, values `known`) to the right-hand side. Solution overwrites R[ro ..].
  */
-function backward(W: Float64Array, R: Float64Array, m: number, width: number, off: number, extra: number, known: Float64Array | null): void {
+function backward(W: Float64Array, base: number, R: Float64Array, ro: number, m: number, width: number, off: number, extra: number, known: Float64Array | null): void {
   for (let k = m - 1; k >= 0; k--) {
-    let sr = R[2 * k]!, si = R[2 * k + 1]!;
+    let sr = R[ro + 2 * k]!, si = R[ro + 2 * k + 1]!;
     if (known !== null) {
       for (let j = 0; j < extra; j++) {
-        const o = 2 * (k * width + off + j);
+        const o = base + 2 * (k * width + off + j);
         const ar = W[o]!, ai = W[o + 1]!, yr = known[2 * j]!, yi = known[2 * j + 1]!;
         sr -= ar * yr - ai * yi;
         si -= ar * yi + ai * yr;
       }
     }
     for (let j = k + 1; j < m; j++) {
-      const o = 2 * (k * width + j);
-      const ar = W[o]!, ai = W[o + 1]!, yr = R[2 * j]!, yi = R[2 * j + 1]!;
+      const o = base + 2 * (k * width + j);
+      const ar = W[o]!, ai = W[o + 1]!, yr = R[ro + 2 * j]!, yi = R[ro + 2 * j + 1]!;
       sr -= ar * yr - ai * yi;
       si -= ar * yi + ai * yr;
     }
-    const o = 2 * (k * width + k);
+    const o = base + 2 * (k * width + k);
     const pr = W[o]!, pi = W[o + 1]!, d = pr * pr + pi * pi;
-    R[2 * k] = (sr * pr + si * pi) / d;
-    R[2 * k + 1] = (si * pr - sr * pi) / d;
+    R[ro + 2 * k] = (sr * pr + si * pi) / d;
+    R[ro + 2 * k + 1] = (si * pr - sr * pi) / d;
   }
 }
