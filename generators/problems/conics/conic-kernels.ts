@@ -17,12 +17,12 @@ export function conicTimesPoint(C: Float64Array, co: number, P: Float64Array, po
   out[oo + 5] = dr * xi + di * xr + er * yi + ei * yr + fr * zi + fi * zr;
 }
 
-/** out[oo], out[oo + 1] = a·b, the bilinear dot product of two packed complex 3-vectors. */
-export function dot3(a: Float64Array, ao: number, b: Float64Array, bo: number, out: Float64Array, oo: number): void {
+/** out[oo], out[oo + 1] = f·(a·b), f times the bilinear dot product of two packed complex 3-vectors. */
+export function dot3(a: Float64Array, ao: number, b: Float64Array, bo: number, out: Float64Array, oo: number, f = 1): void {
   const a0r = a[ao]!, a0i = a[ao + 1]!, a1r = a[ao + 2]!, a1i = a[ao + 3]!, a2r = a[ao + 4]!, a2i = a[ao + 5]!;
   const b0r = b[bo]!, b0i = b[bo + 1]!, b1r = b[bo + 2]!, b1i = b[bo + 3]!, b2r = b[bo + 4]!, b2i = b[bo + 5]!;
-  out[oo] = a0r * b0r - a0i * b0i + a1r * b1r - a1i * b1i + a2r * b2r - a2i * b2i;
-  out[oo + 1] = a0r * b0i + a0i * b0r + a1r * b1i + a1i * b1r + a2r * b2i + a2i * b2r;
+  out[oo] = f * (a0r * b0r - a0i * b0i + a1r * b1r - a1i * b1i + a2r * b2r - a2i * b2i);
+  out[oo + 1] = f * (a0r * b0i + a0i * b0r + a1r * b1i + a1i * b1r + a2r * b2i + a2i * b2r);
 }
 
 /** Real part of the bilinear dot product of two packed complex 3-vectors. */

@@ -74,7 +74,7 @@ export function createHomotopy(args: TangencyHomotopyArgs): Homotopy {
       }
       if (ht !== null) {
         t1[0] = dpar[4 * j]!; t1[1] = dpar[4 * j + 1]!; t1[2] = dpar[4 * j + 2]!; t1[3] = dpar[4 * j + 3]!; t1[4] = 0; t1[5] = 0;
-        dot3(t1, 0, UP, 0, ht, 2 * row); ht[2 * row] *= 2; ht[2 * row + 1] *= 2;
+        dot3(t1, 0, UP, 0, ht, 2 * row, 2);
       }
     }
     // Tangency blocks.
@@ -97,8 +97,8 @@ export function createHomotopy(args: TangencyHomotopyArgs): Homotopy {
         for (let c = 0; c < 6; c++) t1[c] = t1[c]! + dAP[c]!;
         for (let d = 0; d < 2; d++) {
           const dir = co + 6 + 6 * d; // v, then w
-          dot3(AP, 0, chart, dir, jac, r1 * n + cs + 2 * d); jac[r1 * n + cs + 2 * d] *= 2; jac[r1 * n + cs + 2 * d + 1] *= 2;
-          dot3(UP, 0, chart, dir, jac, r2 * n + cs + 2 * d); jac[r2 * n + cs + 2 * d] *= 2; jac[r2 * n + cs + 2 * d + 1] *= 2;
+          dot3(AP, 0, chart, dir, jac, r1 * n + cs + 2 * d, 2);
+          dot3(UP, 0, chart, dir, jac, r2 * n + cs + 2 * d, 2);
           dot3(t1, 0, chart, dir, jac, r3 * n + cs + 2 * d);
         }
         coefficientGradient(P, 0, P, 0, grad, 0);
