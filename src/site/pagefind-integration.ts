@@ -7,13 +7,16 @@ function assertPagefind(step: string, errors: readonly string[]): void {
   if (errors.length > 0) throw new Error(`pagefind ${step} failed: ${errors.join('; ')}`);
 }
 
+/** KaTeX writes each formula twice (HTML and MathML); index only its TeX source (the MathML annotation). */
+export const EXCLUDE_SELECTORS = ['.katex-html', '.katex-mathml semantics > mrow'];
+
 /** Astro integration: after the build, indexes dist/ with the Pagefind Node API and writes dist/pagefind/. */
 export function pagefindIndex(): AstroIntegration {
   return {
     name: 'atlas-pagefind-index',
     hooks: {
       'astro:build:done': async ({ dir, logger }) => {
-        const { index, errors } = await pagefind.createIndex({ forceLanguage: 'en' });
+        const { index, errors } = await pagefind.createIndex({ forceLanguage: 'en', excludeSelectors: EXCLUDE_SELECTORS });
         try {
           if (!index) throw new Error(`pagefind createIndex failed: ${errors.join('; ')}`);
           const added = await index.addDirectory({ path: fileURLToPath(dir) });
