@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import definition from '../../../../generators/problems/circles/circles-tangent-to-three-circles.ts';
 import { systemOf } from '../../../../src/atlas/system-of.ts';
 import { evaluate, real } from '../shared/evaluate.ts';
-import { demoInstance, randomInstance, seeds, solveInstance } from '../shared/solve.ts';
+import { drawnRealSolutions, demoInstance, randomInstance, seeds, solveInstance } from '../shared/solve.ts';
 
 const demo = definition.instances.find((i) => i.id === 'three-ponds')!;
 const p = demo.parameters as Record<string, number>;
@@ -83,8 +83,10 @@ describe('solving circles tangent to three circles', () => {
   });
 
   it('the three ponds: 8 tangent circles found, all 8 real', async () => {
-    const { report, real } = await solveInstance(definition, demoInstance(definition, 'three-ponds'));
-    expect(report.solutions).toHaveLength(8);
-    expect(real).toBe(8);
+    const solved = await solveInstance(definition, demoInstance(definition, 'three-ponds'));
+    expect(solved.report.solutions).toHaveLength(8);
+    expect(solved.real).toBe(8);
+    const drawn = drawnRealSolutions(definition, demoInstance(definition, 'three-ponds'), solved).flat();
+    expect(drawn.filter((i) => i.shape === 'circle' && i.layer === 'solution')).toHaveLength(8);
   });
 });

@@ -3,7 +3,7 @@ import conics from '../../../../generators/problems/intersections/points-common-
 import cubics from '../../../../generators/problems/intersections/points-common-to-two-cubics.ts';
 import { systemOf } from '../../../../src/atlas/system-of.ts';
 import { largestResidual, real, type C } from '../shared/evaluate.ts';
-import { demoInstance, randomInstance, seeds, solveInstance } from '../shared/solve.ts';
+import { drawnRealSolutions, demoInstance, randomInstance, seeds, solveInstance } from '../shared/solve.ts';
 
 describe.each([[conics, 2], [cubics, 3]] as const)('%s', (definition, d) => {
   const system = systemOf(definition);
@@ -42,8 +42,9 @@ describe.each([[conics, 4, 'two-running-tracks'], [cubics, 9, 'woven-threads']] 
   });
 
   it(`the demo curves meet in ${count} real points`, async () => {
-    const { report, real } = await solveInstance(definition, demoInstance(definition, demo));
-    expect(report.solutions).toHaveLength(count);
-    expect(real).toBe(count);
+    const solved = await solveInstance(definition, demoInstance(definition, demo));
+    expect(solved.report.solutions).toHaveLength(count);
+    expect(solved.real).toBe(count);
+    expect(drawnRealSolutions(definition, demoInstance(definition, demo), solved).flat().filter((i) => i.shape === 'point')).toHaveLength(count);
   });
 });

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import definition from '../../../../generators/problems/plane-curves/flexes-of-a-plane-cubic.ts';
 import { systemOf } from '../../../../src/atlas/system-of.ts';
 import { evaluate, paramsFrom, real } from '../shared/evaluate.ts';
-import { demoInstance, randomInstance, seeds, solveInstance } from '../shared/solve.ts';
+import { drawnRealSolutions, demoInstance, randomInstance, seeds, solveInstance } from '../shared/solve.ts';
 
 const system = systemOf(definition);
 // The Fermat cubic x³ + y³ + 1 = 0: its flexes are the 9 points with one homogeneous coordinate 0, e.g. (−1, 0)
@@ -36,8 +36,13 @@ describe('solving flexes of a plane cubic', () => {
   });
 
   it('the toy railway cubic: 9 flexes, exactly 3 real', async () => {
-    const { report, real } = await solveInstance(definition, demoInstance(definition, 'toy-railway'));
-    expect(report.solutions).toHaveLength(9);
-    expect(real).toBe(3);
+    const solved = await solveInstance(definition, demoInstance(definition, 'toy-railway'));
+    expect(solved.report.solutions).toHaveLength(9);
+    expect(solved.real).toBe(3);
+    const view = definition.drawing!.window({});
+    for (const [item] of drawnRealSolutions(definition, demoInstance(definition, 'toy-railway'), solved)) {
+      const { x, y } = item as { x: number; y: number };
+      expect(x > view.xMin && x < view.xMax && y > view.yMin && y < view.yMax).toBe(true);
+    }
   });
 });

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import definition from '../../../../generators/problems/schubert/lines-meeting-four-lines.ts';
 import { systemOf } from '../../../../src/atlas/system-of.ts';
 import { largestResidual, paramsFrom, real } from '../shared/evaluate.ts';
-import { demoInstance, randomInstance, seeds, solveInstance } from '../shared/solve.ts';
+import { drawnRealSolutions, demoInstance, randomInstance, seeds, solveInstance } from '../shared/solve.ts';
 
 const system = systemOf(definition);
 
@@ -42,8 +42,9 @@ describe('solving lines meeting four lines', () => {
   });
 
   it('the four wires: 2 real rods', async () => {
-    const { report, real } = await solveInstance(definition, demoInstance(definition, 'four-wires'));
-    expect(report.solutions).toHaveLength(2);
-    expect(real).toBe(2);
+    const solved = await solveInstance(definition, demoInstance(definition, 'four-wires'));
+    expect(solved.report.solutions).toHaveLength(2);
+    expect(solved.real).toBe(2);
+    expect(drawnRealSolutions(definition, demoInstance(definition, 'four-wires'), solved).flat().filter((i) => i.layer === 'solution')).toHaveLength(2);
   });
 });

@@ -3,6 +3,7 @@ import { systemOf } from '../../../../src/atlas/system-of.ts';
 import { parametersOf } from '../../../../src/atlas/parameters-of.ts';
 import { solveSystem, type SolveReport } from '../../../../src/engine/solve/solve-system.ts';
 import { coordinatesOf, isRealValues } from '../../../../generators/pipeline/coordinates-of.ts';
+import { figureItemSchema, type FigureItem } from '../../../../src/atlas/figure.ts';
 
 /** A solve of one instance with the problem's own start system, and the real count judged in its coordinates. */
 export interface SolvedInstance {
@@ -44,4 +45,20 @@ export function demoInstance(definition: ProblemDefinition, id: string): Instanc
  */
 export function splitSeeds(all: readonly number[], engineIssues: readonly number[] = []): { checked: number[]; skipped: number[] } {
   return { checked: all.filter((s) => !engineIssues.includes(s)), skipped: all.filter((s) => engineIssues.includes(s)) };
+}
+
+/**
+ * The drawing of every real solution of a solved demo instance (real parts of its stored coordinates, as the
+ * writer draws them), each item checked against the figure schema; throws naming the problem on a bad item.
+ */
+export function drawnRealSolutions(definition: ProblemDefinition, instance: InstanceDefinition, solved: SolvedInstance): FigureItem[][] {
+  const params = Object.fromEntries(Object.entries(instance.parameters ?? {}).map(([k, v]) => [k, typeof v === 'number' ? v : v[0]]));
+  return solved.report.solutions
+    .map((s) => coordinatesOf(definition, s.point, definition.slug))
+    .filter((values) => isRealValues(values))
+    .map((values) => {
+      const items = definition.drawing!.solution(Array.from(values).filter((_, i) => i % 2 === 0), params);
+      for (const item of items) if (!figureItemSchema.safeParse(item).success) throw new Error(`${definition.slug}: bad figure item ${JSON.stringify(item)}`);
+      return items;
+    });
 }

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import definition, { clebschFrame } from '../../../../generators/problems/surfaces/lines-on-a-cubic-surface.ts';
 import { systemOf } from '../../../../src/atlas/system-of.ts';
 import { largestResidual, paramsFrom, real } from '../shared/evaluate.ts';
-import { demoInstance, randomInstance, seeds, solveInstance } from '../shared/solve.ts';
+import { drawnRealSolutions, demoInstance, randomInstance, seeds, solveInstance } from '../shared/solve.ts';
 
 const system = systemOf(definition);
 const demo = definition.instances.find((i) => i.kind === 'demo')!;
@@ -56,8 +56,10 @@ describe('solving lines on a cubic surface', () => {
   });
 
   it('the plaster model (a tilted Clebsch diagonal surface): 27 lines, all real (Clebsch 1871)', async () => {
-    const { report, real } = await solveInstance(definition, demo);
-    expect(report.solutions).toHaveLength(27);
-    expect(real).toBe(27);
+    const solved = await solveInstance(definition, demo);
+    expect(solved.report.solutions).toHaveLength(27);
+    expect(solved.real).toBe(27);
+    // Every real line crosses the drawing's view.
+    expect(drawnRealSolutions(definition, demo, solved).map((items) => items.filter((i) => i.shape === 'polyline').length)).toEqual(new Array(27).fill(1));
   });
 });
