@@ -3,14 +3,9 @@ import { COMMITTED_DIR, readStartSet } from '../problems/conics/start-set.ts';
 import { tangencySystem } from '../problems/conics/tangency-system.ts';
 import { certifySolutionsParallel } from '../../src/engine/certify/certify-parallel.ts';
 import { prepareCertifier } from '../../src/engine/certify/certify-solutions.ts';
+import type { BenchCase } from './bench-case.ts';
 import { quadricsWithKnownSolutions } from './known-solution-quadrics.ts';
 
-/** A benchmark case as the bench runner expects it; for certification, found = certified distinct solutions. */
-export interface CertifyBenchCase {
-  readonly name: string;
-  readonly expected: number;
-  run(): Promise<{ paths: number; found: number; failedPaths: number; steps?: number[] }>;
-}
 
 const fiveConics = (() => {
   let loaded: ReturnType<typeof readStartSet> | null = null;
@@ -18,11 +13,12 @@ const fiveConics = (() => {
 })();
 
 /**
- * Certification cases. The five-conic case certifies the committed generic solution set (3264 conics tangent to five
+ * Certification cases (paths = points certified, found = certified distinct, failedPaths = points not certified).
+ * The five-conic case certifies the committed generic solution set (3264 conics tangent to five
  * random complex conics, Chasles 1864; tangency-point formulation, 16 unknowns) on two worker threads; workers stay
  * warm between runs, as in a long solve session. The quadric cases use systems of our own with solutions placed first.
  */
-export const certifySuite: CertifyBenchCase[] = [
+export const cases: BenchCase[] = [
   {
     name: 'certify: 3264 conics tangent to five conics (16 unknowns, 2 workers)',
     expected: 3264,
@@ -43,5 +39,3 @@ export const certifySuite: CertifyBenchCase[] = [
     },
   })),
 ];
-
-export default certifySuite;

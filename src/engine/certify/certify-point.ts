@@ -72,7 +72,7 @@ export function createPointCertifier(system: CertifiableSystem, options: PointCe
    * the deviation of K(X) in that coordinate after a failure (ε-inflation). When real, the centre's imaginary parts are
    * set to 0 and each imaginary interval is exactly [−r_j, r_j]. Returns the largest radius on success, else 0.
    */
-  const inflate = (real: boolean, limit: number, exact: boolean): number => {
+  const inflate = (real: boolean, limit: number): number => {
     for (let a = 0; a < attempts; a++) {
       let largest = 0;
       for (let j = 0; j < n; j++) {
@@ -82,7 +82,7 @@ export function createPointCertifier(system: CertifiableSystem, options: PointCe
         box[4 * j + 2] = real ? -r : widenDown(mi - r); box[4 * j + 3] = real ? r : widenUp(mi + r);
       }
       if (!(largest <= limit)) return 0;
-      if (tester.test(box, centre, inverse, exact ? centreValues : undefined)) return largest;
+      if (tester.test(box, centre, inverse, centreValues)) return largest; // F(m) from startRadii, same centre
       const k = tester.enclosure;
       for (let j = 0; j < n; j++) {
         const mr = centre[2 * j]!, mi = centre[2 * j + 1]!;
@@ -149,7 +149,7 @@ export function createPointCertifier(system: CertifiableSystem, options: PointCe
         if (realBox) for (let j = 0; j < n; j++) centre[2 * j + 1] = 0;
         startRadii(exact);
         if (realBox) for (let j = 0; j < n; j++) radii[j] = Math.max(radii[j]!, 2 * Math.abs(newtonCentre[2 * j + 1]!));
-        const r = inflate(realBox, limit, exact);
+        const r = inflate(realBox, limit);
         if (r > 0) return { certified: true, certifiedReal: realBox, box: box.slice(), radius: r };
       }
     }
