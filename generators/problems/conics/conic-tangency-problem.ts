@@ -7,6 +7,8 @@ import { CONIC_LETTERS, parameterNames } from './conic-names.ts';
 import { tangencyPoint, type ConicCoefficients } from './conic-geometry.ts';
 import { tangencyDiscriminant } from './sextic-formulation.ts';
 import { loadStartSet } from './start-set.ts';
+import { tangencyAlternateCharts } from './tangency-rechart.ts';
+import { isRealPoint } from '../../../src/engine/solve/real.ts';
 import type { TangencyShape } from './tangency-layout.ts';
 
 /** Conics through p general points tangent to 5 − p general conics, p = 5…0 (Chasles 1864; Bashelor–Ksir–Traves 2008). */
@@ -68,6 +70,8 @@ export function conicTangencyProblem(points: number, seeds: { generic: number; s
       working: { url: new URL('./tangency-homotopy.ts', import.meta.url).href, constants: { points, conics: k, chart: set.chart } },
       start: { parameters: set.parameters, solutions: set.solutions },
       toShown: toShownChart,
+      isReal: (shown) => isRealPoint(normalizeByLargest(shown)),
+      alternateCharts: tangencyAlternateCharts(shape, seeds.start),
     };
   };
   const through = points === 0 ? '' : `passing through ${plural(points, 'general point')} $(x_j, y_j)$ and `;

@@ -8,7 +8,8 @@ import type { TrackerSettings } from '../track/settings.ts';
 import { createPointIndex } from './point-index.ts';
 import { createModuleLegTracker, type HomotopyModuleRef } from './module-tracker.ts';
 import { routeThrough, randomGamma, type LegTracker } from './route.ts';
-import { trackRoute } from './track-route.ts';
+import { duplicateCount, trackRoute } from './track-route.ts';
+import { retryInOtherCharts, type AlternateCharts } from './chart-retry.ts';
 
 /** A problem solved from a stored generic solution set. */
 export interface ParameterProblem {
@@ -20,6 +21,10 @@ export interface ParameterProblem {
   readonly start: { readonly parameters: Float64Array; readonly solutions: readonly Float64Array[] };
   /** Maps a working solution to the shown unknowns (packed complex). */
   readonly toShown: (x: Float64Array) => Float64Array;
+  /** Whether a shown solution is real (default isRealPoint; a complex chart needs its own test). */
+  readonly isReal?: (shown: Float64Array) => boolean;
+  /** Other charts in which failed paths are re-tracked (see chart-retry.ts). */
+  readonly alternateCharts?: AlternateCharts;
 }
 
 export interface ParameterSolveOptions {
@@ -35,20 +40,26 @@ export interface ParameterSolveOptions {
   readonly settings?: Partial<TrackerSettings>;
   /** How legs are tracked (a worker-pool LegTracker, say); default: on this thread. */
   readonly track?: LegTracker;
+  /** Trackers for the alternate charts' modules (default: on this thread; only failed paths go there). */
+  readonly trackerFor?: (ref: HomotopyModuleRef) => Promise<LegTracker>;
 }
 
 /** SolveReport with the parameter-homotopy start and the jump check's counts. */
+export type { AlternateCharts } from './chart-retry.ts';
+
 export interface ParameterSolveReport extends Omit<SolveReport, 'startSystem'> {
   readonly startSystem: 'parameter-homotopy';
   /** Starts re-tracked with safe settings because two paths met; regular ends still coinciding afterwards. */
   readonly jumpRetracks: number;
   readonly duplicates: number;
+  /** Failed paths recovered by re-tracking in an alternate chart. */
+  readonly rechartRecovered: number;
 }
 
 /**
  * Solves the shown system at `target` (packed complex, the shown system's parameter order) by coefficient-parameter
  * homotopy (Morgan–Sommese, Appl. Math. Comput. 29, 1989) from the stored generic set, with the jump check of
- * trackRoute. Solutions: distinct regular ends (relative tolerance 1e-8) mapped to the shown unknowns, sorted by
+ * trackRoute and, for paths that still fail, re-tracking in alternate charts (chart-retry.ts). Solutions: distinct regular ends (relative tolerance 1e-8) mapped to the shown unknowns, sorted by
  * their coordinates; residual and condition are the working system's at the end. Bounds are read off `shown`.
  */
 export async function solveByParameterHomotopy(problem: ParameterProblem, target: Float64Array, options: ParameterSolveOptions): Promise<ParameterSolveReport> {
@@ -62,7 +73,10 @@ export async function solveByParameterHomotopy(problem: ParameterProblem, target
     : [{ from: problem.start.parameters, to: target, gamma: randomGamma(random) }];
   const track = options.track ?? (await createModuleLegTracker(problem.working, options.settings));
   const route = await trackRoute(track, legs, problem.start.solutions);
-  const found = collect(route.ends, problem.toShown);
+  const rechartRecovered = problem.alternateCharts && route.ends.some((e) => e.outcome !== 'regular')
+    ? await retryInOtherCharts(problem.working, problem.alternateCharts, legs, problem.start.solutions, route.ends, 2, options.trackerFor)
+    : 0;
+  const found = collect(route.ends, problem.toShown, problem.isReal ?? isRealPoint);
   return {
     bezoutBound: bezoutBound(problem.shown),
     multihomogeneousBound: multihomogeneousBound(problem.shown),
@@ -73,11 +87,12 @@ export async function solveByParameterHomotopy(problem: ParameterProblem, target
     stats: statistics(route.ends),
     seconds: (performance.now() - began) / 1000,
     jumpRetracks: route.jumpRetracks,
-    duplicates: route.duplicates,
+    duplicates: duplicateCount(route.ends),
+    rechartRecovered,
   };
 }
 
-function collect(ends: readonly PathEnd[], toShown: (x: Float64Array) => Float64Array): FoundSolution[] {
+function collect(ends: readonly PathEnd[], toShown: (x: Float64Array) => Float64Array, isReal: (x: Float64Array) => boolean): FoundSolution[] {
   const out: FoundSolution[] = [];
   let index: ReturnType<typeof createPointIndex> | null = null;
   ends.forEach((e, i) => {
@@ -87,7 +102,7 @@ function collect(ends: readonly PathEnd[], toShown: (x: Float64Array) => Float64
     if (j >= 0) { out[j]!.paths.push(i); out[j]!.multiplicity++; return; }
     index.add(e.point);
     const point = toShown(e.point);
-    out.push({ point, residual: e.residual, condition: e.condition, multiplicity: 1, real: isRealPoint(point), paths: [i] });
+    out.push({ point, residual: e.residual, condition: e.condition, multiplicity: 1, real: isReal(point), paths: [i] });
   });
   return out.sort((a, b) => compareLexicographic(a.point, b.point));
 }

@@ -1,0 +1,60 @@
+import { createRandom } from '../../../src/engine/random.ts';
+import type { AlternateCharts } from '../../../src/engine/parameter/solve-by-parameter-homotopy.ts';
+import { cross3 } from './conic-kernels.ts';
+import { randomChart } from './tangency-seed.ts';
+import { pointOf, unknownCount, type TangencyShape } from './tangency-layout.ts';
+
+/** (a·b) for packed complex m-vectors, bilinear, written to out[0..1]. */
+function dotC(a: Float64Array, ao: number, b: Float64Array, bo: number, m: number, out: Float64Array): void {
+  let re = 0, im = 0;
+  for (let j = 0; j < m; j++) {
+    const ar = a[ao + 2 * j]!, ai = a[ao + 2 * j + 1]!, br = b[bo + 2 * j]!, bi = b[bo + 2 * j + 1]!;
+    re += ar * br - ai * bi; im += ar * bi + ai * br;
+  }
+  out[0] = re; out[1] = im;
+}
+
+/** z / w for complex numbers given as pairs. */
+function divide(zr: number, zi: number, wr: number, wi: number): [number, number] {
+  const d = wr * wr + wi * wi;
+  return [(zr * wr + zi * wi) / d, (zi * wr - zr * wi) / d];
+}
+
+/**
+ * The same geometric solution (the conic and its points of contact) in another chart: u ↦ u / (ℓ′·u), and each point
+ * P ↦ P / (m′·P), written as o′ + s′v′ + r′w′ with s′ = ((P′ − o′) × w′)·c / ((v′ × w′)·c), r′ = (v′ × (P′ − o′))·c / ((v′ × w′)·c), c = conj(v′ × w′).
+ */
+export function convertChart(shape: TangencyShape, x: Float64Array, from: Float64Array, to: Float64Array): Float64Array {
+  const out = new Float64Array(2 * unknownCount(shape)), t = new Float64Array(2);
+  dotC(to, 0, x, 0, 6, t);
+  for (let k = 0; k < 6; k++) [out[2 * k], out[2 * k + 1]] = divide(x[2 * k]!, x[2 * k + 1]!, t[0]!, t[1]!);
+  const P = new Float64Array(6), D = new Float64Array(6), vw = new Float64Array(6), num = new Float64Array(6), c = new Float64Array(6);
+  for (let i = 0; i < shape.conics; i++) {
+    const co = 2 * (6 + 12 * i);
+    pointOf(from, i, x, P, 0);
+    dotC(to, co + 18, P, 0, 3, t);
+    for (let j = 0; j < 3; j++) {
+      const [pr, pi] = divide(P[2 * j]!, P[2 * j + 1]!, t[0]!, t[1]!);
+      D[2 * j] = pr - to[co + 2 * j]!; D[2 * j + 1] = pi - to[co + 2 * j + 1]!;
+    }
+    cross3(to, co + 6, to, co + 12, vw, 0);
+    for (let j = 0; j < 6; j++) c[j] = j % 2 === 0 ? vw[j]! : -vw[j]!;
+    const den = new Float64Array(2);
+    dotC(vw, 0, c, 0, 3, den);
+    cross3(D, 0, to, co + 12, num, 0);
+    dotC(num, 0, c, 0, 3, t);
+    [out[2 * (6 + 2 * i)], out[2 * (6 + 2 * i) + 1]] = divide(t[0]!, t[1]!, den[0]!, den[1]!);
+    cross3(to, co + 6, D, 0, num, 0);
+    dotC(num, 0, c, 0, 3, t);
+    [out[2 * (7 + 2 * i)], out[2 * (7 + 2 * i) + 1]] = divide(t[0]!, t[1]!, den[0]!, den[1]!);
+  }
+  return out;
+}
+
+/** Alternate charts for the engine's chart retries: the k-th is randomChart from seed·1000 + k. */
+export function tangencyAlternateCharts(shape: TangencyShape, seed: number): AlternateCharts {
+  return {
+    constants: (k) => ({ ...shape, chart: randomChart(shape, createRandom(seed * 1000 + k)) }),
+    convert: (x, from, to) => convertChart(shape, x, from.chart as Float64Array, to.chart as Float64Array),
+  };
+}
