@@ -40,6 +40,7 @@ export default defineProblem({
   formulation: {
     unknowns: ['a', 'b', 'c', 'd'],
     parameters: names,
+    groups: [['a', 'b'], ['c', 'd']],
     equations: (u, q, ops) => {
       // The line (x, y, z) = (a + c·s, b + d·s, s) lies on the surface iff f(a + cs, b + ds, s) vanishes identically in s.
       const inS = substitute(ops, names.map((n) => q[n]!), exponents, [[u.a!, u.c!], [u.b!, u.d!], [null, ops.constant(1)]]);
@@ -51,6 +52,7 @@ export default defineProblem({
     description: [
       'A line not parallel to the plane $z = 0$ is $\\{(a + cs,\\ b + ds,\\ s)\\}$, so four numbers $(a, b, c, d)$ chart the lines in space.',
       'Substituting into $f$ gives a cubic in $s$ whose four coefficients must vanish: four equations of degree $3$ in $(a, b, c, d)$, Bézout bound $3^4 = 81$.',
+      'In the groups $\\{a, b\\}$ (the point where the line crosses $z = 0$) and $\\{c, d\\}$ (its direction) the coefficient of $s^k$ has bidegree $(3 - k, k)$, so the two-homogeneous bound is $45$; the atlas solves by total degree to show the naive count at work.',
     ].join(' '),
   },
   trueCount: {

@@ -6,6 +6,7 @@ import { parametersOf } from '../../../src/atlas/parameters-of.ts';
 import { countSourceSchema } from '../../../src/atlas/source.ts';
 import { figureItemSchema } from '../../../src/atlas/figure.ts';
 import { degree } from '../../../src/engine/expr/degree.ts';
+import { multihomogeneousBound } from '../../../src/engine/solve/solve-system.ts';
 
 // The Bézout bound of each formulation, product of the equation degrees read off the graph. These are our own
 // derivations ("[derived]" in REFERENCES.md), recomputed by hand beside each row.
@@ -23,6 +24,14 @@ const expectedBezout: Record<string, number> = {
   'lines-meeting-four-lines': 4, // two equations bilinear in (s, t)
   'flexes-of-a-plane-cubic': 9, // f and its Hessian, both cubics
   'bitangents-of-a-plane-quartic': 1080, // degrees 5, 6, 6, 6 (REFERENCES.md: 1080)
+};
+
+// Two-homogeneous bounds of the formulations that declare variable groups (our own derivations; REFERENCES.md
+// lists 288 for the bitangents in two groups and 45 for the lines on a cubic surface).
+const expectedMultihomogeneous: Record<string, number> = {
+  'lines-meeting-four-lines': 2, // bidegree (1, 1) twice
+  'lines-on-a-cubic-surface': 45, // bidegrees (3, 0), (2, 1), (1, 2), (0, 3)
+  'bitangents-of-a-plane-quartic': 288, // bidegrees (4, 1), (4, 2), (4, 2), (4, 2)
 };
 
 describe('the problem registry', () => {
@@ -52,12 +61,6 @@ describe('the problem registry', () => {
       }
     });
 
-    it('has the Bézout bound of its formulation', () => {
-      const system = systemOf(definition);
-      const bound = system.equations.reduce((b, e) => b * degree(e), 1);
-      expect(bound).toBe(expectedBezout[slug]);
-    });
-
     it('draws each demo configuration with valid figure items inside a finite window', () => {
       if (!definition.drawing) return;
       for (const demo of definition.instances.filter((i) => i.kind === 'demo')) {
@@ -69,5 +72,24 @@ describe('the problem registry', () => {
         expect(w.yMax).toBeGreaterThan(w.yMin);
       }
     });
+  });
+});
+
+// The bounds of the problems listed above (other helpers' problems carry their own checks).
+describe.each(Object.entries(expectedBezout))('%s', (slug, bezout) => {
+  const definition = problems.find((p) => p.slug === slug);
+
+  it('is in the registry', () => {
+    expect(definition).toBeDefined();
+  });
+
+  it(`has the Bézout bound ${bezout}, the product of its equations' degrees`, () => {
+    const system = systemOf(definition!);
+    expect(system.equations.reduce((b, e) => b * degree(e), 1)).toBe(bezout);
+  });
+
+  it('has the two-homogeneous bound of its variable groups, if it declares any', () => {
+    const system = systemOf(definition!);
+    expect(system.groups ? multihomogeneousBound(system) : null).toBe(expectedMultihomogeneous[slug] ?? null);
   });
 });

@@ -55,6 +55,13 @@ describe('solving lines on a cubic surface', () => {
     expect(report.stats).toMatchObject({ tracked: 81, regular: 27, singular: 0, atInfinity: 54, failed: 0 });
   });
 
+  it.each(seeds(5))('random complex surface %i, two-homogeneous start: 27 lines of 45 paths, the other 18 at infinity', async (seed) => {
+    const { report } = await solveInstance(definition, randomInstance(seed), 'multihomogeneous');
+    expect(report.multihomogeneousBound).toBe(45);
+    expect(report.solutions).toHaveLength(27);
+    expect(report.stats).toMatchObject({ tracked: 45, regular: 27, singular: 0, atInfinity: 18, failed: 0 });
+  });
+
   it('the plaster model (a tilted Clebsch diagonal surface): 27 lines, all real (Clebsch 1871)', async () => {
     const solved = await solveInstance(definition, demo);
     expect(solved.report.solutions).toHaveLength(27);
