@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { problems } from '../../../generators/problems/index.ts';
 import { validateDefinition } from '../../../src/atlas/validate-definition.ts';
+import { mathSegments } from '../../../src/atlas/tex-check.ts';
 import { systemOf } from '../../../src/atlas/system-of.ts';
 import { parametersOf } from '../../../src/atlas/parameters-of.ts';
 import { countSourceSchema } from '../../../src/atlas/source.ts';
@@ -45,6 +46,17 @@ describe('the problem registry', () => {
     it('passes the definition validator (schema, names, square system, TeX renders with KaTeX)', () => {
       const check = validateDefinition(definition);
       expect(check.issues).toEqual([]);
+    });
+
+    it('keeps MDX-unsafe characters ({, }, <) out of the prose outside math', () => {
+      const texts = [definition.title, definition.statement, definition.excessNote, definition.formulation.description, ...definition.instances.flatMap((i) => [i.label, i.description])];
+      for (const text of texts) {
+        let prose = '';
+        let at = 0;
+        for (const m of mathSegments(text)) { prose += text.slice(at, m.start); at = m.end; }
+        prose += text.slice(at);
+        expect(prose).not.toMatch(/[{}<]/);
+      }
     });
 
     it('names its source in the count-source schema', () => {
