@@ -31,6 +31,8 @@ export interface LinearSolver {
    * numerically singular (a zero pivot).
    */
   factor(matrix: Float64Array): number;
+  /** Optional: factors like `factor` without the condition estimate (faster); false when numerically singular. */
+  factorOnly?(matrix: Float64Array): boolean;
   /** Solves A·out = b with the last factored matrix; `out` may alias `b`. Allocates nothing. */
   solve(b: Float64Array, out: Float64Array): void;
 }

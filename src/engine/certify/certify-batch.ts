@@ -15,11 +15,12 @@ export interface CertifyBatch {
   readonly options: PointCertifierOptions;
 }
 
-/** Per-point results of a batch, packed: flags (bit 0 certified, bit 1 real), radii, boxes (4n each), reasons. */
+/** Per-point results of a batch, packed: flags (bit 0 certified, bit 1 real), radii, boxes and enclosures (4n each), reasons. */
 export interface CertifiedBatch {
   readonly flags: Uint8Array;
   readonly radii: Float64Array;
   readonly boxes: Float64Array;
+  readonly enclosures: Float64Array;
   readonly reasons: (string | undefined)[];
 }
 
@@ -38,16 +39,16 @@ export function certifyBatch(batch: CertifyBatch): CertifiedBatch {
   system.setParameters(batch.parameters);
   const certifier = createPointCertifier(system, batch.options);
   const count = batch.points.length / (2 * n);
-  const flags = new Uint8Array(count), radii = new Float64Array(count), boxes = new Float64Array(4 * n * count);
+  const flags = new Uint8Array(count), radii = new Float64Array(count), boxes = new Float64Array(4 * n * count), enclosures = new Float64Array(4 * n * count);
   const reasons: (string | undefined)[] = [];
   for (let k = 0; k < count; k++) {
     const result = certifier.point(batch.points.subarray(2 * n * k, 2 * n * (k + 1)), batch.real);
     flags[k] = (result.certified ? 1 : 0) | (result.certifiedReal ? 2 : 0);
     radii[k] = result.radius;
-    if (result.certified) boxes.set(result.box, 4 * n * k);
+    if (result.certified) { boxes.set(result.box, 4 * n * k); enclosures.set(result.enclosure, 4 * n * k); }
     reasons.push(result.reason);
   }
-  return { flags, radii, boxes, reasons };
+  return { flags, radii, boxes, enclosures, reasons };
 }
 
 /** Unpacks a batch result into per-point certificates. */
@@ -57,6 +58,7 @@ export function unpackBatch(result: CertifiedBatch, n: number): PointCertificate
     certifiedReal: (f & 2) === 2,
     radius: result.radii[k]!,
     box: (f & 1) === 1 ? result.boxes.slice(4 * n * k, 4 * n * (k + 1)) : new Float64Array(0),
+    enclosure: (f & 1) === 1 ? result.enclosures.slice(4 * n * k, 4 * n * (k + 1)) : new Float64Array(0),
     ...(result.reasons[k] === undefined ? {} : { reason: result.reasons[k] }),
   }));
 }

@@ -9,8 +9,10 @@ export interface PointCertificate {
   certifiedReal: boolean;
   /** The box proven to hold exactly one solution: [reLo, reHi, imLo, imHi] per unknown (empty when not certified). */
   box: Float64Array;
-  /** Half-width of the box in every real coordinate (0 when not certified). */
+  /** Largest half-width of the box over its coordinates (0 when not certified). */
   radius: number;
+  /** Krawczyk's image K(X) ⊂ box, which holds the solution too: a tighter enclosure (empty when not certified). */
+  enclosure: Float64Array;
   reason?: string;
 }
 
@@ -122,7 +124,7 @@ export function createPointCertifier(system: CertifiableSystem, options: PointCe
   };
 
   const point = (x: Float64Array, real: boolean): PointCertificate => {
-    const fail = (reason: string): PointCertificate => ({ certified: false, certifiedReal: false, box: new Float64Array(0), radius: 0, reason });
+    const fail = (reason: string): PointCertificate => ({ certified: false, certifiedReal: false, box: new Float64Array(0), radius: 0, enclosure: new Float64Array(0), reason });
     let size = 0;
     for (let k = 0; k < 2 * n; k++) size = Math.max(size, Math.abs(x[k]!));
     if (!(size < Infinity)) return fail('the point has a coordinate that is not finite');
@@ -150,7 +152,7 @@ export function createPointCertifier(system: CertifiableSystem, options: PointCe
         startRadii(exact);
         if (realBox) for (let j = 0; j < n; j++) radii[j] = Math.max(radii[j]!, 2 * Math.abs(newtonCentre[2 * j + 1]!));
         const r = inflate(realBox, limit);
-        if (r > 0) return { certified: true, certifiedReal: realBox, box: box.slice(), radius: r };
+        if (r > 0) return { certified: true, certifiedReal: realBox, box: box.slice(), radius: r, enclosure: tester.enclosure.slice() };
       }
     }
     return fail(`Krawczyk's test failed on every box tried, up to half-width ${limit.toExponential(2)} (near-singular or clustered solution)`);

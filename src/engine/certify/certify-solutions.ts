@@ -15,7 +15,10 @@ export interface CertifiedSolution {
   certifiedReal: boolean;
   /** Interval box, [reLo, reHi, imLo, imHi] per unknown (empty when not certified). */
   box: Float64Array;
+  /** Largest half-width of the box. */
   radius: number;
+  /** A tighter box inside `box` that holds the same solution (Krawczyk's image K(X)); empty when not certified. */
+  enclosure: Float64Array;
   /** Why not certified, or why not counted as distinct. */
   reason?: string;
   sameAs?: number;

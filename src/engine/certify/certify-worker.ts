@@ -5,7 +5,7 @@ import { certifyBatch, type CertifyBatch } from './certify-batch.ts';
 parentPort!.on('message', (m: { id: number; batch: CertifyBatch }) => {
   try {
     const result = certifyBatch(m.batch);
-    parentPort!.postMessage({ id: m.id, result }, [result.radii.buffer as ArrayBuffer, result.boxes.buffer as ArrayBuffer, result.flags.buffer as ArrayBuffer]);
+    parentPort!.postMessage({ id: m.id, result }, [result.radii.buffer as ArrayBuffer, result.boxes.buffer as ArrayBuffer, result.enclosures.buffer as ArrayBuffer, result.flags.buffer as ArrayBuffer]);
   } catch (e) {
     parentPort!.postMessage({ id: m.id, error: e instanceof Error ? e.message : String(e) });
   }

@@ -3,7 +3,7 @@ import type { CertificationReport, CertifiedSolution } from './certify-solutions
 import { overlapGroups } from './overlap-groups.ts';
 
 /**
- * Turns per-point certificates into a report. Certified boxes are grouped by overlap; each group's region is
+ * Turns per-point certificates into a report. Certified enclosures are grouped by overlap; each group's region is
  * disjoint from the others', so groups count as distinct solutions. In a group of several boxes the hull is tested:
  * a pass proves they all hold the same solution (sameAs the first); a failure leaves the group counted once, with a
  * reason on the later members (distinctness among them not proven).
@@ -16,7 +16,8 @@ export function settleDistinct(
 ): CertificationReport {
   const solutions: CertifiedSolution[] = results.map((r) => ({ ...r }));
   const certifiedIndices = solutions.flatMap((s, i) => (s.certified ? [i] : []));
-  const groupOf = overlapGroups(certifiedIndices.map((i) => solutions[i]!.box), n);
+  // each solution lies in its enclosure K(X) ⊂ X, so disjoint enclosures already prove different solutions
+  const groupOf = overlapGroups(certifiedIndices.map((i) => solutions[i]!.enclosure), n);
   const members = new Map<number, number[]>();
   groupOf.forEach((g, k) => {
     const list = members.get(g);

@@ -4,16 +4,20 @@ import { lowerExpression } from './lower.ts';
 import { gradient } from './differentiate.ts';
 import { generateSource, type ProgramOutputs } from './codegen.ts';
 
-/** The sizes of a compiled system: neq equations, n unknowns, np parameters. */
+/**
+ * The sizes of a compiled system: neq equations, n unknowns, np parameters, and the parameters whose derivative
+ * columns jp holds (all of 0…np−1 in order when omitted).
+ */
 export interface SystemShape {
   readonly neq: number;
   readonly n: number;
   readonly np: number;
+  readonly derivativeParameters?: readonly number[];
 }
 
 /**
  * Evaluates F(x; p) and its derivatives. x (2n), p (2np) are packed complex; v (2neq) receives the values,
- * jx (2·neq·n, row-major) ∂F/∂x, jp (2·neq·np, row-major) ∂F/∂p. Pass jx = null for values only, jp = null to
+ * jx (2·neq·n, row-major) ∂F/∂x, jp (2·neq·k, row-major) ∂F/∂p for the k derivative parameters (default all np). Pass jx = null for values only, jp = null to
  * skip ∂F/∂p (jx null with jp given is not supported). Allocates nothing; exact up to one rounding per operation.
  */
 export type SystemEvaluator = (x: Float64Array, p: Float64Array, v: Float64Array, jx: Float64Array | null, jp: Float64Array | null) => void;
@@ -31,7 +35,7 @@ export interface CompiledSystem extends SystemShape {
  * reverse-mode differentiation, and ∂F/∂p, hash-consing identical subtrees (common-subexpression elimination).
  * Throws RangeError naming the equation when an unknown or parameter index is out of range.
  */
-export function compileSystem(system: PolynomialSystem): CompiledSystem {
+export function compileSystem(system: PolynomialSystem, options: { derivativeParameters?: readonly number[] } = {}): CompiledSystem {
   const n = system.unknowns.length, np = system.parameters.length, neq = system.equations.length;
   const tape = createTape();
   const memo = new Map();
@@ -51,19 +55,36 @@ export function compileSystem(system: PolynomialSystem): CompiledSystem {
     where = i;
     values.push(lowerExpression(tape, e, leaves, memo));
   });
+  const columns = options.derivativeParameters;
+  columns?.forEach((k) => {
+    if (!Number.isInteger(k) || k < 0 || k >= np) throw new RangeError(`derivative parameter ${k} is outside 0..${np - 1}`);
+  });
   const jx: number[] = [], jp: number[] = [];
   for (const root of values) {
     const g = gradient(tape, root, n, np);
     jx.push(...g.dx);
-    jp.push(...g.dp);
+    jp.push(...(columns ? columns.map((k) => g.dp[k]!) : g.dp));
   }
   const outputs = { values, jx, jp };
   const source = generateSource(tape.instructions, outputs);
-  return { ...compiledFromSource(source, { neq, n, np }), program: { instructions: tape.instructions, outputs } };
+  const shape: SystemShape = columns ? { neq, n, np, derivativeParameters: [...columns] } : { neq, n, np };
+  return { ...compiledFromSource(source, shape), program: { instructions: tape.instructions, outputs } };
 }
 
-/** Rebuilds a compiled system from its source text (as sent to a worker) and shape; no program attached. */
+const evaluators = new Map<string, SystemEvaluator>();
+const EVALUATOR_CACHE_SIZE = 32;
+
+/**
+ * Rebuilds a compiled system from its source text (as sent to a worker) and shape; no program attached.
+ * Functions are cached by source text (the last 32), so a system of the same structure reuses warm, already
+ * optimised code across solves and instances (the source carries no parameter values).
+ */
 export function compiledFromSource(source: string, shape: SystemShape): CompiledSystem {
-  const evaluate = new Function(source)() as SystemEvaluator;
-  return { neq: shape.neq, n: shape.n, np: shape.np, evaluate, source };
+  let evaluate = evaluators.get(source);
+  if (evaluate === undefined) {
+    evaluate = new Function(source)() as SystemEvaluator;
+    if (evaluators.size >= EVALUATOR_CACHE_SIZE) evaluators.delete(evaluators.keys().next().value!);
+    evaluators.set(source, evaluate);
+  }
+  return { ...shape, evaluate, source };
 }

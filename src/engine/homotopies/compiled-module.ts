@@ -1,22 +1,25 @@
 import type { Homotopy } from '../homotopy.ts';
 import { compiledFromSource, type SystemShape } from '../compile/compile-system.ts';
 import { parameterHomotopy } from './parameter-homotopy.ts';
+import { firstParameterHomotopy } from './first-parameter-homotopy.ts';
 import { withProjectiveGroups } from './projective-groups.ts';
 
-/** Structured-cloneable description of a parameter homotopy over a compiled system (sent to workers as is). */
-export interface CompiledHomotopyArgs {
+/**
+ * Structured-cloneable description of a homotopy over a compiled system (sent to workers as is): either the
+ * segment p0 → p1 (parameterHomotopy, optional gamma) or, with `fixed`, parameter 0 as t and the rest fixed
+ * (firstParameterHomotopy).
+ */
+export type CompiledHomotopyArgs = {
   readonly source: string;
   readonly shape: SystemShape;
-  readonly p0: Float64Array;
-  readonly p1: Float64Array;
-  readonly gamma?: Float64Array;
-  /** Multiprojective groups (coordinate indices, homogenising coordinate last) for the at-infinity test. */
+  /** Multiprojective groups (coordinate indices, homogenising coordinate last) for the distance to infinity. */
   readonly projectiveGroups?: readonly (readonly number[])[];
-}
+} & ({ readonly p0: Float64Array; readonly p1: Float64Array; readonly gamma?: Float64Array } | { readonly fixed: Float64Array });
 
-/** Pool homotopy module: rebuilds the compiled system from source text and returns parameterHomotopy over it. */
+/** Pool homotopy module: rebuilds the compiled system from source text (cached) and returns the homotopy. */
 export function createHomotopy(args: CompiledHomotopyArgs): Homotopy {
-  const h = parameterHomotopy(compiledFromSource(args.source, args.shape), args.p0, args.p1, args.gamma);
+  const compiled = compiledFromSource(args.source, args.shape);
+  const h = 'fixed' in args ? firstParameterHomotopy(compiled, args.fixed) : parameterHomotopy(compiled, args.p0, args.p1, args.gamma);
   return args.projectiveGroups ? withProjectiveGroups(h, args.projectiveGroups) : h;
 }
 

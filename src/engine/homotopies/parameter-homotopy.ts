@@ -12,6 +12,9 @@ export function parameterHomotopy(compiled: CompiledSystem, p0: Float64Array, p1
   const { n, np, neq } = compiled;
   if (neq !== n) throw new RangeError(`parameter homotopy needs a square system, got ${neq} equations in ${n} unknowns`);
   if (p0.length !== 2 * np || p1.length !== 2 * np) throw new RangeError(`parameter vectors must have length ${2 * np} (packed complex)`);
+  if (compiled.derivativeParameters && (compiled.derivativeParameters.length !== np || compiled.derivativeParameters.some((k, i) => k !== i))) {
+    throw new RangeError('parameter homotopy needs ∂F/∂p for every parameter (compile without derivativeParameters)');
+  }
   const p = new Float64Array(2 * np), dp = new Float64Array(2 * np), jp = new Float64Array(2 * neq * np);
   for (let i = 0; i < 2 * np; i++) dp[i] = p1[i]! - p0[i]!;
   const gRe = gamma ? gamma[0]! : 1, gIm = gamma ? gamma[1]! : 0;

@@ -15,12 +15,12 @@ export function withProjectiveGroups(homotopy: Homotopy, groups: readonly (reado
     }
     return d;
   };
-  return { ...bind(homotopy), infinityDistance };
-}
-
-function bind(h: Homotopy): Homotopy {
-  const out: { -readonly [K in keyof Homotopy]: Homotopy[K] } = { n: h.n, evaluate: h.evaluate.bind(h) };
-  if (h.evaluateValue) out.evaluateValue = h.evaluateValue.bind(h);
-  if (h.createSolver) out.createSolver = h.createSolver.bind(h);
+  const out: { -readonly [K in keyof Homotopy]: Homotopy[K] } = {
+    n: homotopy.n,
+    evaluate: (x, tRe, tIm, h, jac, ht) => homotopy.evaluate(x, tRe, tIm, h, jac, ht),
+    infinityDistance,
+  };
+  if (homotopy.evaluateValue) out.evaluateValue = (x, tRe, tIm, h) => homotopy.evaluateValue!(x, tRe, tIm, h);
+  if (homotopy.createSolver) out.createSolver = () => homotopy.createSolver!();
   return out;
 }

@@ -106,6 +106,11 @@ export function createDenseLU(n: number): DenseSolver {
       const inv = estimateInverseNorm1(solver, n);
       return Number.isFinite(inv) ? norm1 * inv : Infinity;
     },
+    factorOnly(matrix) {
+      for (let i = 0; i < 2 * n * n; i++) lu[i] = matrix[i]!;
+      singular = !factorInPlace(lu, perm, n);
+      return !singular;
+    },
     solve,
     solveAdjoint,
   };

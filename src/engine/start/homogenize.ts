@@ -1,18 +1,18 @@
 import type { ExprNode } from '../expr/node.ts';
-import { constant, mul, pow, unknown } from '../expr/build.ts';
+import { mul, pow, unknown } from '../expr/build.ts';
 import { degree } from '../expr/degree.ts';
 
 /**
  * Multihomogenises expressions: unknown j keeps index j, group g gets the homogenising coordinate with index
  * n + g, and every term of a sum is multiplied by h_g^(D_g(sum) − D_g(term)), so each result is homogeneous of
- * degree D_g(f) (the graph's upper bound) in group g. Parameters are replaced by the given constants
- * (packed complex values), so the result has no parameters. Shared nodes stay shared (memo by identity).
+ * degree D_g(f) (the graph's upper bound) in group g. Each parameter node is replaced by `parameter(node)`
+ * (a renumbered parameter, say). Shared nodes stay shared (memo by identity).
  */
 export function multihomogenize(
   equations: readonly ExprNode[],
   groups: readonly (readonly number[])[],
   n: number,
-  parameterValues: Float64Array,
+  parameter: (node: ExprNode & { kind: 'param' }) => ExprNode,
 ): ExprNode[] {
   const sets = groups.map((g) => new Set(g));
   const degreeMemos = groups.map(() => new Map<ExprNode, number>());
@@ -28,12 +28,9 @@ export function multihomogenize(
       case 'unknown':
         out = node;
         break;
-      case 'param': {
-        const re = parameterValues[2 * node.index], im = parameterValues[2 * node.index + 1];
-        if (re === undefined || im === undefined) throw new RangeError(`parameter ${node.name} (index ${node.index}) has no value`);
-        out = constant(re, im);
+      case 'param':
+        out = parameter(node);
         break;
-      }
       case 'add': {
         const total = degrees(node);
         out = {

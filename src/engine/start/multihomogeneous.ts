@@ -1,8 +1,8 @@
 import type { ExprNode } from '../expr/node.ts';
-import { add, constant, mul, unknown } from '../expr/build.ts';
+import { add, mul, unknown } from '../expr/build.ts';
 import type { RandomSource } from '../random.ts';
 import { createDenseLU } from '../linalg/dense-lu.ts';
-import type { StartSystem } from './start-system.ts';
+import type { ParameterBank, StartSystem } from './start-system.ts';
 
 /**
  * The linear-product start system of Morgan–Sommese (Appl. Math. Comput. 24, 1987): G_i = ∏_g ∏_{k<d_ig} ℓ_igk
@@ -11,13 +11,14 @@ import type { StartSystem } from './start-system.ts';
  * A start solution picks, for each equation, one group g and one factor of ℓ_ig·, each group g picked exactly
  * |group g| times; each group's coordinates then solve |g| linear forms plus the chart (dense LU). The count is
  * the multihomogeneous Bézout number. Path order: equations in order, each trying groups then factors in order.
- * Random draws: the forms, in equation, group, factor, coordinate order.
+ * Random draws: the forms, in equation, group, factor, coordinate order; their coefficients become bank parameters.
  */
 export function multihomogeneousStart(
   degrees: readonly (readonly number[])[],
   groups: readonly (readonly number[])[],
   charts: readonly Float64Array[],
   random: RandomSource,
+  bank: ParameterBank,
 ): StartSystem {
   const n = degrees.length, G = groups.length, N = n + G;
   const coords = groups.map((g, k) => [...g, n + k]);
@@ -26,7 +27,7 @@ export function multihomogeneousStart(
     for (let k = 0; k < coords[g]!.length; k++) random.gaussianComplex(c, 2 * k);
     return c;
   })));
-  const equations: ExprNode[] = forms.map((row) => mul(...row.flatMap((list, g) => list.map((c) => linearForm(coords[g]!, c)))));
+  const equations: ExprNode[] = forms.map((row) => mul(...row.flatMap((list, g) => list.map((c) => linearForm(coords[g]!, c, bank)))));
   degrees.forEach((row, i) => {
     if (row.every((d) => d === 0)) throw new RangeError(`equation ${i} has degree 0 in every group`);
   });
@@ -71,6 +72,6 @@ export function multihomogeneousStart(
   return { equations, count: points.length, starts };
 }
 
-function linearForm(coords: readonly number[], c: Float64Array): ExprNode {
-  return add(...coords.map((j, k) => mul(constant(c[2 * k]!, c[2 * k + 1]!), unknown(`X${j}`, j))));
+function linearForm(coords: readonly number[], c: Float64Array, bank: ParameterBank): ExprNode {
+  return add(...coords.map((j, k) => mul(bank.add(c[2 * k]!, c[2 * k + 1]!), unknown(`X${j}`, j))));
 }

@@ -1,12 +1,12 @@
 import type { ExprNode, PolynomialSystem } from '../expr/node.ts';
-import { add, constant, mul, param, sub } from '../expr/build.ts';
+import { add, mul, param, sub } from '../expr/build.ts';
 import { degree, groupDegrees } from '../expr/degree.ts';
 import { createRandom } from '../random.ts';
 import { compileSystem } from '../compile/compile-system.ts';
 import type { CompiledHomotopyArgs } from '../homotopies/compiled-module.ts';
 import { validateGroups } from './groups.ts';
 import { multihomogenize } from './homogenize.ts';
-import { chartEquation, type StartSystem } from './start-system.ts';
+import { chartEquation, type ParameterBank, type StartSystem } from './start-system.ts';
 import { totalDegreeStart } from './total-degree.ts';
 import { multihomogeneousStart } from './multihomogeneous.ts';
 
@@ -23,42 +23,54 @@ export interface HomotopyPlan {
 }
 
 /**
- * Plans the homotopy H(X, t) = (1 − t)·γ·G(X) + t·F̂(X) (F̂: the target multihomogenised at the given
- * parameters), with one random complex chart equation per group left unchanged along the path: the gamma
- * trick of Morgan (1987) with γ uniform on the unit circle. Random draws from `seed`, in this order: γ, the
- * charts (group by group, Gaussian complex), then the start system's forms. Same seed ⇒ same plan.
+ * Plans the homotopy H(X, t) = (1 − t)·γ·G(X) + t·F̂(X) (F̂: the target multihomogenised), with one random
+ * complex chart equation per group left unchanged along the path: the gamma trick of Morgan (1987) with γ
+ * uniform on the unit circle. Random draws from `seed`, in this order: γ, the charts (group by group,
+ * Gaussian complex), then the start system's forms. Same seed ⇒ same plan. Everything random and the target's
+ * parameter values enter the compiled code as parameters (t first), so the code depends only on the
+ * system's structure and stays warm across solves and instances.
  */
 export function planHomotopy(system: PolynomialSystem, parameters: Float64Array, seed: number, kind: 'total-degree' | 'multihomogeneous'): HomotopyPlan {
-  if (parameters.length !== 2 * system.parameters.length) {
-    throw new RangeError(`expected ${system.parameters.length} parameter values (packed length ${2 * system.parameters.length}), got length ${parameters.length}`);
+  const np = system.parameters.length;
+  if (parameters.length !== 2 * np) {
+    throw new RangeError(`expected ${np} parameter values (packed length ${2 * np}), got length ${parameters.length}`);
   }
   if (kind === 'multihomogeneous' && !system.groups) throw new RangeError('a multihomogeneous start needs variable groups (system.groups)');
   const groups = validateGroups(system, kind === 'multihomogeneous' ? system.groups : undefined);
   const n = system.unknowns.length, N = n + groups.length;
+  const values: number[] = Array.from(parameters);
+  const names: string[] = ['t', ...system.parameters];
+  const bank: ParameterBank = {
+    add(re, im) {
+      values.push(re, im);
+      names.push(`r${names.length}`);
+      return param(names[names.length - 1]!, names.length - 1);
+    },
+  };
   const random = createRandom(seed);
-  const gamma = new Float64Array(2);
-  random.unitComplex(gamma, 0);
+  const gammaValue = new Float64Array(2);
+  random.unitComplex(gammaValue, 0);
+  const gamma = bank.add(gammaValue[0]!, gammaValue[1]!);
   const coords = groups.map((g, k) => [...g, n + k]);
   const charts = coords.map((c) => {
     const v = new Float64Array(2 * c.length);
     for (let k = 0; k < c.length; k++) random.gaussianComplex(v, 2 * k);
     return v;
   });
+  const chartRows = coords.map((c, k) => chartEquation(c, charts[k]!, bank));
   const start: StartSystem = kind === 'total-degree'
     ? totalDegreeStart(system.equations.map((e) => degree(e)), charts[0]!)
-    : multihomogeneousStart(groupDegrees(system.equations, groups), groups, charts, random);
-  const target = multihomogenize(system.equations, groups, n, parameters);
+    : multihomogeneousStart(groupDegrees(system.equations, groups), groups, charts, random, bank);
+  const target = multihomogenize(system.equations, groups, n, (node) => param(node.name, node.index + 1));
   const t = param('t', 0);
-  const g = constant(gamma[0]!, gamma[1]!);
-  const equations: ExprNode[] = target.map((f, i) => add(mul(sub(1, t), g, start.equations[i]!), mul(t, f)));
-  coords.forEach((c, k) => equations.push(chartEquation(c, charts[k]!)));
+  const equations: ExprNode[] = target.map((f, i) => add(mul(sub(1, t), gamma, start.equations[i]!), mul(t, f)));
+  equations.push(...chartRows);
   const unknowns = [...system.unknowns, ...groups.map((_, k) => `h${k}`)];
-  const compiled = compileSystem({ unknowns, parameters: ['t'], equations });
+  const compiled = compileSystem({ unknowns, parameters: names, equations }, { derivativeParameters: [0] });
   const args: CompiledHomotopyArgs = {
     source: compiled.source,
-    shape: { neq: N, n: N, np: 1 },
-    p0: new Float64Array([0, 0]),
-    p1: new Float64Array([1, 0]),
+    shape: { neq: N, n: N, np: names.length, derivativeParameters: [0] },
+    fixed: new Float64Array(values),
     projectiveGroups: coords,
   };
   return { startSystem: kind, projectiveGroups: coords, N, count: start.count, starts: start.starts, args };

@@ -19,7 +19,7 @@ export interface Stepper {
   rejected: number;
   /** Step |Δt| carried from segment to segment; reset it to start a path. */
   stepSize: number;
-  /** Condition estimate of ∂H/∂x at the last factorisation. */
+  /** Condition estimate of ∂H/∂x at the last factorisation (0 when not estimated: inside segments without a condition limit). */
   condition: number;
   settings: TrackerSettings;
   /** Tracks x in place from t = a to t = b; aborts with 'ill-conditioned' above conditionLimit and with 'step-budget' after attemptLimit attempts in this segment. */
@@ -40,11 +40,22 @@ export function createStepper(homotopy: Homotopy, settings: TrackerSettings): St
 
   const self: Stepper = { n, steps: 0, rejected: 0, stepSize: settings.maxStep / 2, condition: 1, settings, segment, newton, residual };
 
+  let wantCondition = true;
+  /** Factors jac; sets `condition` (0 = not estimated: the solver's factorOnly was used); false when singular. */
+  function factorJacobian(): boolean {
+    if (!wantCondition && solver.factorOnly) {
+      const ok = solver.factorOnly(jac);
+      self.condition = ok ? 0 : Infinity;
+      return ok;
+    }
+    self.condition = solver.factor(jac);
+    return Number.isFinite(self.condition);
+  }
+
   /** out = −(∂H/∂x)⁻¹ ∂H/∂t · d at (z, t); false when the Jacobian is singular or values are not finite. */
   function tangent(z: Float64Array, tRe: number, tIm: number, dRe: number, dIm: number, out: Float64Array): boolean {
     homotopy.evaluate(z, tRe, tIm, h, jac, ht);
-    self.condition = solver.factor(jac);
-    if (!Number.isFinite(self.condition)) return false;
+    if (!factorJacobian()) return false;
     solver.solve(ht, out);
     return scaleTangent(out, dRe, dIm);
   }
@@ -68,6 +79,7 @@ export function createStepper(homotopy: Homotopy, settings: TrackerSettings): St
     let tau = 0;
     let have1 = false;
     const budget = Math.min(s.maxSteps, self.steps + self.rejected + attemptLimit);
+    wantCondition = conditionLimit < Infinity;
     while (tau < 1) {
       if (self.steps + self.rejected >= budget) return 'step-budget';
       const hMax = s.maxStep / length;
@@ -117,8 +129,7 @@ export function createStepper(homotopy: Homotopy, settings: TrackerSettings): St
     let previous = Infinity, first = -1;
     for (let it = 0; it < s.maxCorrectorIterations; it++) {
       homotopy.evaluate(xp, tRe, tIm, h, jac, ht);
-      self.condition = solver.factor(jac);
-      if (!Number.isFinite(self.condition)) return -Infinity;
+      if (!factorJacobian()) return -Infinity;
       solver.solve(h, dx);
       const delta = normInf(dx) / (1 + normInf(xp));
       if (!(delta === delta)) return -Infinity;
