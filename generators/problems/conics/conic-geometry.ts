@@ -50,6 +50,7 @@ export function tangencyPoint(u: readonly number[], given: readonly number[]): [
   const cross = (p: number[], q: number[]): number[] => [p[1]! * q[2]! - p[2]! * q[1]!, p[2]! * q[0]! - p[0]! * q[2]!, p[0]! * q[1]! - p[1]! * q[0]!];
   const kernels = [cross(M[0]!, M[1]!), cross(M[0]!, M[2]!), cross(M[1]!, M[2]!)];
   const k = kernels.sort((p, q) => Math.hypot(...q) - Math.hypot(...p))[0]!;
-  if (Math.abs(k[2]!) < 1e-12 * Math.hypot(...k)) return null;
+  const scale = Math.max(...M.flat().map(Math.abs)) ** 2;
+  if (!(Math.hypot(...k) > 1e-9 * scale) || Math.abs(k[2]!) < 1e-12 * Math.hypot(...k)) return null; // rank ≤ 1, or at infinity
   return [k[0]! / k[2]!, k[1]! / k[2]!];
 }
