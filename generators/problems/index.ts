@@ -8,6 +8,11 @@ import conicsThrough3Points from './conics/conics-through-3-points-tangent-to-2-
 import conicsThrough2Points from './conics/conics-through-2-points-tangent-to-3-lines.ts';
 import conicsThrough1Point from './conics/conics-through-1-point-tangent-to-4-lines.ts';
 import conicsTangentTo5Lines from './conics/conics-tangent-to-5-lines.ts';
+import conicsThrough4PointsTangentTo1Conic from './conics/conics-through-4-points-tangent-to-1-conic.ts';
+import conicsThrough3PointsTangentTo2Conics from './conics/conics-through-3-points-tangent-to-2-conics.ts';
+import conicsThrough2PointsTangentTo3Conics from './conics/conics-through-2-points-tangent-to-3-conics.ts';
+import conicsThrough1PointTangentTo4Conics from './conics/conics-through-1-point-tangent-to-4-conics.ts';
+import conicsTangentTo5Conics from './conics/conics-tangent-to-5-conics.ts';
 import linesOnACubicSurface from './surfaces/lines-on-a-cubic-surface.ts';
 import linesMeetingFourLines from './schubert/lines-meeting-four-lines.ts';
 import flexesOfAPlaneCubic from './plane-curves/flexes-of-a-plane-cubic.ts';
@@ -24,6 +29,11 @@ export const problems: readonly ProblemDefinition[] = [
   conicsThrough2Points,
   conicsThrough1Point,
   conicsTangentTo5Lines,
+  conicsThrough4PointsTangentTo1Conic,
+  conicsThrough3PointsTangentTo2Conics,
+  conicsThrough2PointsTangentTo3Conics,
+  conicsThrough1PointTangentTo4Conics,
+  conicsTangentTo5Conics,
   linesOnACubicSurface,
   linesMeetingFourLines,
   flexesOfAPlaneCubic,

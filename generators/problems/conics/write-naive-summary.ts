@@ -9,7 +9,7 @@ import fiveConics from './conics-tangent-to-5-conics.ts';
 /** The committed summary file of the naive 7776-path run on the sextic formulation (generic instance, seed 1). */
 export const NAIVE_SUMMARY_FILE = join(COMMITTED_DIR, 'naive-run-conics-tangent-to-5-conics.json');
 
-if (import.meta.main) {
+if (process.argv[1] !== undefined && import.meta.url.endsWith(process.argv[1].split('/').pop()!)) {
   const workers = Number(process.argv[2] ?? 2);
   const summary = await naiveRun(fiveConics, 'generic', 1, workers);
   const sorted = Object.fromEntries(Object.entries({ ...summary, seconds: Number(summary.seconds.toFixed(1)), workers }).sort(([a], [b]) => a.localeCompare(b)));
