@@ -3,7 +3,7 @@ import { resolve } from 'node:path';
 import { canonicalJson } from '../../src/atlas/canonical-json.ts';
 import { AtlasError } from '../pipeline/atlas-error.ts';
 import { loadTarget, isFileTarget } from '../pipeline/registry.ts';
-import { solveShard } from '../pipeline/solve-part.ts';
+import { solveShard } from '../pipeline/solve-shard.ts';
 import { contentRoot } from '../write/content-paths.ts';
 import type { CommandContext } from './context.ts';
 import { EXIT } from './exit-codes.ts';

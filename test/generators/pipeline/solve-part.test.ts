@@ -1,7 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import { canonicalJson } from '../../../src/atlas/canonical-json.ts';
 import { loadDefinitionFile } from '../../../generators/pipeline/load-definition.ts';
-import { mergeParts, partSchema, solveShard, type SolvePart } from '../../../generators/pipeline/solve-part.ts';
+import { mergeParts } from '../../../generators/pipeline/merge-parts.ts';
+import { partSchema, type SolvePart } from '../../../generators/pipeline/part-file.ts';
+import { solveShard } from '../../../generators/pipeline/solve-shard.ts';
 import { solveProblem } from '../../../generators/pipeline/solve-problem.ts';
 import { fakeEngine } from './fixtures/fake-engine.ts';
 import { TWO_CONICS } from './fixtures/solved-fixture.ts';
