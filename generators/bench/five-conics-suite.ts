@@ -8,14 +8,8 @@ import { solveByParameterHomotopy, type ParameterProblem, type ParameterSolveRep
 import { buildStartSet } from '../problems/conics/start-set.ts';
 import { naiveRun } from '../problems/conics/naive-run.ts';
 import fiveConics from '../problems/conics/conics-tangent-to-5-conics.ts';
+import type { BenchCase, BenchOutcome } from './bench-case.ts';
 
-/** A benchmark case as the bench runner expects it (found = distinct nonsingular solutions; `runs` overrides the runner's repeat count). */
-export interface FiveConicsBenchCase {
-  readonly name: string;
-  readonly expected: number;
-  readonly runs?: number;
-  run(): Promise<{ paths: number; found: number; failedPaths: number; steps?: number[]; real?: number; retries?: number }>;
-}
 
 const WORKERS = 2;
 let prepared: Promise<ParameterProblem> | null = null;
@@ -31,14 +25,12 @@ async function solveAt(target: Float64Array, seed: number): Promise<ParameterSol
   return solveByParameterHomotopy(p, target, { seed, track });
 }
 
-const summary = (r: ParameterSolveReport) => ({
-  paths: r.stats.tracked,
-  found: r.solutions.filter((s) => s.condition < 1e10).length,
-  failedPaths: r.stats.failed,
-  steps: r.ends.map((e) => e.steps),
-  real: r.solutions.filter((s) => s.real).length,
-  retries: r.stats.retries + r.jumpRetracks,
-});
+/** The runner's outcome (found = distinct nonsingular conics); retries and real conics go to stderr beside the table. */
+function summary(label: string, r: ParameterSolveReport): BenchOutcome {
+  const real = r.solutions.filter((s) => s.real).length;
+  process.stderr.write(`${label}: ${r.solutions.length} distinct, ${real} real, ${r.stats.failed} failed, ${r.stats.retries} retries (${r.jumpRetracks} jump re-tracks, ${r.rechartRecovered} recovered in another chart), ${r.seconds.toFixed(2)} s\n`);
+  return { paths: r.stats.tracked, found: r.solutions.filter((s) => s.condition < 1e10).length, failedPaths: r.stats.failed, steps: r.ends.map((e) => e.steps) };
+}
 
 let instance = 0;
 
@@ -46,15 +38,15 @@ let instance = 0;
  * The five-conic benchmarks (3264 conics tangent to five general conics: Chasles 1864): parameter homotopy from the
  * committed generic set to fresh random complex instances, monodromy discovery from a solution-first seed, the real
  * stage-lights demo (five ellipses), 20 random instances in one case, and the naive 7776-path total-degree run on
- * the sextic formulation. All on a warm pool of two workers.
+ * the sextic formulation (found = genuine conics; the 4512 others should end on double lines). A warm pool of two workers.
  */
-export const fiveConicsSuite: FiveConicsBenchCase[] = [
+export const cases: BenchCase[] = [
   {
     name: 'five conics: parameter homotopy, stored set → random complex instance (2 workers)',
     expected: 3264,
     async run() {
       const k = instance++;
-      return summary(await solveAt(randomParameterPoint(30, createRandom(9000 + k)), k));
+      return summary(`random instance ${k}`, await solveAt(randomParameterPoint(30, createRandom(9000 + k)), k));
     },
   },
   {
@@ -65,7 +57,9 @@ export const fiveConicsSuite: FiveConicsBenchCase[] = [
       const pool = await sharedPool(WORKERS);
       const url = (await problem()).working.url;
       const { monodromy } = await buildStartSet({ points: 0, conics: 5 }, 7000 + k, 3264, (chart) => createPoolLegTracker(pool, { url, constants: { points: 0, conics: 5, chart } }));
-      return { paths: monodromy.stats.paths, found: monodromy.solutions.length, failedPaths: monodromy.stats.failedPaths, steps: monodromy.stats.steps, retries: 2 * monodromy.stats.jumps };
+      const m = monodromy.stats;
+      process.stderr.write(`monodromy: ${monodromy.solutions.length} (${monodromy.stop}), ${m.paths} paths, ${m.failedPaths} failed, ${m.jumps} jumps (${m.unresolvedJumps} unresolved), ${m.nodes} nodes, ${m.edges} edges, ${m.rounds} rounds\n`);
+      return { paths: m.paths, found: monodromy.solutions.length, failedPaths: m.failedPaths, steps: m.steps };
     },
   },
   {
@@ -73,30 +67,29 @@ export const fiveConicsSuite: FiveConicsBenchCase[] = [
     expected: 3264,
     async run() {
       const demo = fiveConics.instances.find((i) => i.kind === 'demo')!;
-      return summary(await solveAt(parametersOf(fiveConics, demo), 1));
+      return summary('stage-lights demo', await solveAt(parametersOf(fiveConics, demo), 1));
     },
   },
   {
-    name: 'five conics: 20 random complex instances in a row (found = fewest, failed = total)',
+    name: 'five conics: the same 20 random complex instances each run (found = fewest, failed = total)',
     expected: 3264,
-    runs: 1,
     async run() {
-      let found = Infinity, failedPaths = 0, paths = 0, retries = 0;
+      let found = Infinity, failedPaths = 0, paths = 0;
       const steps: number[] = [];
       for (let k = 0; k < 20; k++) {
-        const s = summary(await solveAt(randomParameterPoint(30, createRandom(5000 + k)), k));
-        found = Math.min(found, s.found); failedPaths += s.failedPaths; paths += s.paths; retries += s.retries;
-        steps.push(...s.steps);
+        const s = summary(`instance ${5000 + k}`, await solveAt(randomParameterPoint(30, createRandom(5000 + k)), k));
+        found = Math.min(found, s.found); failedPaths += s.failedPaths; paths += s.paths;
+        steps.push(...(s.steps ?? []));
       }
-      return { paths, found, failedPaths, steps, retries };
+      return { paths, found, failedPaths, steps };
     },
   },
   {
     name: 'five conics: naive total-degree homotopy on the sextic formulation, 7776 paths (found = genuine conics)',
     expected: 3264,
-    runs: 1,
     async run() {
       const s = await naiveRun(fiveConics, 'generic', 1, WORKERS);
+      process.stderr.write(`naive run: ${s.genuine} genuine conics (${s.genuinePaths} paths, ${s.relabelledPaths} relabelled), ${s.doubleLinePaths} paths on double lines, ${s.otherPaths} other, ${s.failedPaths} failed\n`);
       return { paths: s.paths, found: s.genuine, failedPaths: s.failedPaths };
     },
   },
