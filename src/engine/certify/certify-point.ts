@@ -1,7 +1,8 @@
-import { widenDown, widenUp } from '../interval/outward.ts';
+import { inflateBox, startRadii } from './box-search.ts';
 import type { CertifiableSystem } from './compiled-system.ts';
 import { invertComplex, multiplyComplex } from './complex-inverse.ts';
-import { createKrawczykTester } from './krawczyk.ts';
+import { refineExactly } from './exact-refinement.ts';
+import { createPointWorkspace } from './point-workspace.ts';
 
 /** The outcome for one approximate solution, before distinctness is settled. */
 export interface PointCertificate {
@@ -30,90 +31,18 @@ export interface PointCertifierOptions {
   attempts?: number;
 }
 
-const FLOOR = 2 ** -44; // ≈ 5.7e-14, relative to 1 + |m_j|: a few ulps, so K_j can fit strictly inside
-
 /**
  * Certifies one approximate solution: one Newton step (floating point) gives the centre m and Y ≈ J(x)⁻¹; boxes with
  * per-coordinate half-widths from the Newton step and |Y|·|F(m)| are inflated from K(X) until Krawczyk's test passes,
- * the attempts run out, or a half-width exceeds maxRadius·(1 + ‖x‖∞). With a real system (real parameters and constants) a box centred at Re(m), symmetric
- * about the real subspace, is tried first: a pass proves the solution real.
+ * the attempts run out, or a half-width exceeds maxRadius·(1 + ‖x‖∞) (box-search.ts). With a real system (real
+ * parameters and constants) a box centred at Re(m), symmetric about the real subspace, is tried first: a pass proves
+ * the solution real. Where double-precision residuals fail, the same is tried after exact refinement.
  */
 export function createPointCertifier(system: CertifiableSystem, options: PointCertifierOptions = {}): PointCertifier {
-  const n = system.size;
   const maxRadius = options.maxRadius ?? 1e-6;
   const attempts = options.attempts ?? 5;
-  const tester = createKrawczykTester(system);
-  const f0 = new Float64Array(2 * n), j0 = new Float64Array(2 * n * n), inverse = new Float64Array(2 * n * n);
-  const step = new Float64Array(2 * n), centre = new Float64Array(2 * n), box = new Float64Array(4 * n);
-  const centreBox = new Float64Array(4 * n), centreValues = new Float64Array(4 * n), radii = new Float64Array(n);
-
-  /**
-   * Starting half-widths per coordinate: 2·(|Δx_j| + (|Y|·|F(m)|)_j) with F(m) in interval arithmetic (so its rounding
-   * noise counts), at least 2⁻⁴⁴(1 + |m_j|). A heuristic: it decides where to look, not what is proven.
-   */
-  const startRadii = (exact: boolean): void => {
-    for (let j = 0; j < n; j++) {
-      centreBox[4 * j] = centreBox[4 * j + 1] = centre[2 * j]!;
-      centreBox[4 * j + 2] = centreBox[4 * j + 3] = centre[2 * j + 1]!;
-    }
-    if (exact) system.exactValues(centre, centreValues); else system.intervalValues(centreBox, centreValues);
-    for (let i = 0; i < n; i++) {
-      let row = 0;
-      for (let k = 0; k < n; k++) {
-        const y = Math.abs(inverse[2 * (i * n + k)]!) + Math.abs(inverse[2 * (i * n + k) + 1]!);
-        const v = 4 * k;
-        row += y * Math.max(Math.abs(centreValues[v]!), Math.abs(centreValues[v + 1]!), Math.abs(centreValues[v + 2]!), Math.abs(centreValues[v + 3]!));
-      }
-      const size = Math.abs(centre[2 * i]!) + Math.abs(centre[2 * i + 1]!);
-      radii[i] = Math.max(2 * (row + Math.abs(step[2 * i]!) + Math.abs(step[2 * i + 1]!)), FLOOR * (1 + size));
-    }
-  };
-
-  /**
-   * Tries boxes centre ± radii (per coordinate, the same for real and imaginary parts), inflating each radius to twice
-   * the deviation of K(X) in that coordinate after a failure (ε-inflation). When real, the centre's imaginary parts are
-   * set to 0 and each imaginary interval is exactly [−r_j, r_j]. Returns the largest radius on success, else 0.
-   */
-  const inflate = (real: boolean, limit: number): number => {
-    for (let a = 0; a < attempts; a++) {
-      let largest = 0;
-      for (let j = 0; j < n; j++) {
-        const r = radii[j]!, mr = centre[2 * j]!, mi = centre[2 * j + 1]!;
-        largest = Math.max(largest, r);
-        box[4 * j] = widenDown(mr - r); box[4 * j + 1] = widenUp(mr + r);
-        box[4 * j + 2] = real ? -r : widenDown(mi - r); box[4 * j + 3] = real ? r : widenUp(mi + r);
-      }
-      if (!(largest <= limit)) return 0;
-      if (tester.test(box, centre, inverse, centreValues)) return largest; // F(m) from startRadii, same centre
-      const k = tester.enclosure;
-      for (let j = 0; j < n; j++) {
-        const mr = centre[2 * j]!, mi = centre[2 * j + 1]!;
-        const deviation = Math.max(Math.abs(k[4 * j]! - mr), Math.abs(k[4 * j + 1]! - mr), Math.abs(k[4 * j + 2]! - mi), Math.abs(k[4 * j + 3]! - mi));
-        if (!(deviation < Infinity)) return 0; // NaN or overflow: more room will not help
-        radii[j] = Math.max(radii[j]!, 2 * deviation);
-      }
-    }
-    return 0;
-  };
-
-  /**
-   * Fallback for ill-conditioned solutions: Newton steps m ← m − J(m)⁻¹F(m) with F(m) evaluated exactly (so the
-   * residual is not drowned in rounding noise), a fresh Y = J(m)⁻¹, and F(m) enclosed exactly in the test.
-   * False when the Jacobian turns singular.
-   */
-  const refine = (real: boolean): boolean => {
-    for (let iteration = 0; iteration < 3; iteration++) {
-      if (real) for (let j = 0; j < n; j++) centre[2 * j + 1] = 0;
-      system.pointJacobian(centre, f0, j0);
-      if (!invertComplex(j0, n, inverse)) return false;
-      if (iteration === 2) break;
-      system.exactValues(centre, centreValues);
-      for (let k = 0; k < 2 * n; k++) f0[k] = 0.5 * centreValues[2 * k]! + 0.5 * centreValues[2 * k + 1]!;
-      multiplyComplex(inverse, f0, n, step);
-      for (let k = 0; k < 2 * n; k++) centre[k] = centre[k]! - step[k]!;
-    }
-    return true;
-  };
+  const ws = createPointWorkspace(system);
+  const { n, values: f0, jacobian: j0, inverse, step, centre, box, tester } = ws;
 
   /** Krawczyk's test on the given box (4n) around its midpoint, once, with Y from the midpoint: true proves one zero. */
   const hull = (given: Float64Array): boolean => {
@@ -147,11 +76,11 @@ export function createPointCertifier(system: CertifiableSystem, options: PointCe
     for (const exact of [false, true]) {
       for (const realBox of realFirst ? [true, false] : [false]) {
         centre.set(newtonCentre);
-        if (exact && !refine(realBox)) continue;
+        if (exact && !refineExactly(ws, realBox)) continue;
         if (realBox) for (let j = 0; j < n; j++) centre[2 * j + 1] = 0;
-        startRadii(exact);
-        if (realBox) for (let j = 0; j < n; j++) radii[j] = Math.max(radii[j]!, 2 * Math.abs(newtonCentre[2 * j + 1]!));
-        const r = inflate(realBox, limit);
+        startRadii(ws, exact);
+        if (realBox) for (let j = 0; j < n; j++) ws.radii[j] = Math.max(ws.radii[j]!, 2 * Math.abs(newtonCentre[2 * j + 1]!));
+        const r = inflateBox(ws, realBox, limit, attempts);
         if (r > 0) return { certified: true, certifiedReal: realBox, box: box.slice(), radius: r, enclosure: tester.enclosure.slice() };
       }
     }
