@@ -32,7 +32,8 @@ export async function solveSystem(system: PolynomialSystem, parameters: Float64A
   const job: PathJob = {
     homotopyModule: COMPILED_HOMOTOPY_MODULE,
     args: plan.args,
-    key: `${options.seed}:${plan.args.source.length}:${hashText(plan.args.source)}`,
+    // exact: the source's hash and length, and every fixed parameter value (the compiled code carries no values)
+    key: `${hashText(plan.args.source)}:${plan.args.source.length}:${'fixed' in plan.args ? Array.from(plan.args.fixed).join(',') : ''}`,
     n: plan.N,
     starts: plan.starts.slice(2 * plan.N * first, 2 * plan.N * last),
   };

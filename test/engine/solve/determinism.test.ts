@@ -1,5 +1,7 @@
 import { afterAll, describe, expect, it } from 'vitest';
 import type { PathEnd } from '../../../src/engine/homotopy.ts';
+import type { PolynomialSystem } from '../../../src/engine/expr/node.ts';
+import { add, mul, param, pow, sub, unknown } from '../../../src/engine/expr/build.ts';
 import { collectSolutions, solveSystem, type SolveReport } from '../../../src/engine/solve/solve-system.ts';
 import { closeSharedPool } from '../../../src/engine/pool/shared-pool.ts';
 import { createRandom } from '../../../src/engine/random.ts';
@@ -55,6 +57,23 @@ describe('determinism', () => {
     expect(bytes(pooled)).toBe(bytes(local));
     const again = await solveSystem(cubics, new Float64Array(0), { seed: 9, workers: 2 });
     expect(bytes(again)).toBe(bytes(await solveSystem(cubics, new Float64Array(0), { seed: 9 })));
+  });
+
+  it('the pool solves instances of one structure with their own parameter values (no stale cached homotopy)', async () => {
+    const x = unknown('x', 0), y = unknown('y', 1);
+    const conics: PolynomialSystem = {
+      unknowns: ['x', 'y'],
+      parameters: ['a', 'b'],
+      equations: [sub(add(pow(x, 2), pow(y, 2)), param('a', 0)), sub(mul(x, y), param('b', 1))],
+    };
+    for (const [a, b] of [[5, 2], [10, 3]]) {
+      const p = new Float64Array([a, 0, b, 0]);
+      const pooled = await solveSystem(conics, p, { seed: 3, workers: 2 });
+      expect(bytes(pooled)).toBe(bytes(await solveSystem(conics, p, { seed: 3 })));
+      // hand arithmetic: x² + y² = a, xy = b has the 4 points with x² = (a ± √(a² − 4b²))/2
+      for (const s of pooled.solutions) expect(s.residual).toBeLessThan(1e-14);
+      expect(pooled.solutions).toHaveLength(4);
+    }
   });
 
   it('reports progress up to the number of paths', async () => {
