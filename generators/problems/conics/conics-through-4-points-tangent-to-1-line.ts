@@ -3,8 +3,8 @@ import { pointLineProblem } from './point-line-conditions.ts';
 
 export default defineProblem(pointLineProblem(4, 20260104, {
   id: 'flower-bed',
-  label: 'An oval flower bed',
-  description: 'A gardener plans an oval flower bed that must pass through 4 marker stakes and just touch 1 straight hedge (units: metres); each conic that does so is a candidate outline.',
+  label: 'A flower bed between stakes and hedges',
+  description: 'A gardener plans a flower bed that must pass through 4 marker stakes and just touch 1 straight hedge (units: metres); every conic that does so is drawn, though only a closed one (an ellipse) can outline a bed.',
   points: [[3.4, -0.2], [0.4, 1.8], [-2.6, -0.2], [0.9, -2.1]],
   lines: [[0, 1, -2.6]],
 }));
