@@ -41,7 +41,7 @@ export default defineProblem({
       kind: 'published',
       authors: ['O. Hesse'],
       year: 1844,
-      title: 'Über die Wendepunkte der Curven dritter Ordnung',
+      title: 'Über die Wendepuncte der Curven dritter Ordnung',
       venue: 'Journal für die reine und angewandte Mathematik 28 (1844), 97–107',
       note: 'The flexes as the intersection with the Hessian curve; the count 3d(d − 2) is one of Plücker’s formulas. That exactly three flexes of a real smooth cubic are real is classical. Venue details from memory.',
     },
