@@ -63,7 +63,7 @@ export default defineProblem({
       year: 1849,
       title: 'On the triple tangent planes of surfaces of the third order',
       venue: 'The Cambridge and Dublin Mathematical Journal 4 (1849), 118–132',
-      note: 'Cayley found that a cubic surface contains finitely many lines and Salmon, in a note in the same volume, that there are 27. The possible real counts 27, 15, 7, 3 are Schläfli's (1863); all 27 real on the diagonal surface is Clebsch's (1871). Page range from memory.',
+      note: 'Cayley found that a cubic surface contains finitely many lines and Salmon, in a note in the same volume, that there are 27. The possible real counts 27, 15, 7, 3 are Schläfli’s (1863); all 27 real on the diagonal surface is Clebsch’s (1871). Page range from memory.',
     },
   },
   excessNote: [
