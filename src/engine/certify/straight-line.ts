@@ -1,4 +1,6 @@
 import type { ExprNode, PolynomialSystem } from '../expr/node.ts';
+import { createProgramBuilder } from './program-builder.ts';
+import { differentiate } from './reverse-mode.ts';
 
 /** A signed reference to a slot; null stands for the exact value 0. */
 export type SlotRef = { readonly slot: number; readonly neg: boolean } | null;
@@ -37,82 +39,10 @@ export function lowerSystem(system: PolynomialSystem): StraightLineProgram {
   if (system.equations.length !== n) {
     throw new RangeError(`certification needs a square system: ${system.equations.length} equations in ${n} unknowns`);
   }
-  const isPoint: boolean[] = [];
-  const varies: boolean[] = []; // slot depends on an unknown
-  const constants: { slot: number; re: number; im: number }[] = [];
-  const parameters: { slot: number; index: number }[] = [];
   const forward: Instruction[] = [];
   const backward: Instruction[] = [];
-  let code = forward;
-  const shared = new Map<string, number>();
+  const builder = createProgramBuilder(forward);
   let realConstants = true;
-
-  const newSlot = (point: boolean, vary: boolean): number => {
-    isPoint.push(point);
-    varies.push(vary);
-    return isPoint.length - 1;
-  };
-  const leaf = (key: string, make: (slot: number) => void): number => {
-    let slot = shared.get(key);
-    if (slot === undefined) {
-      slot = newSlot(true, false);
-      shared.set(key, slot);
-      make(slot);
-    }
-    return slot;
-  };
-  const constantSlot = (re: number, im: number): number =>
-    leaf(`c${re},${im}`, (slot) => constants.push({ slot, re, im }));
-  const one = (neg = false): SlotRef => ({ slot: constantSlot(1, 0), neg });
-  const isOne = (r: SlotRef): boolean => r !== null && r.slot === shared.get('c1,0');
-
-  const emit = (key: string, vary: boolean, make: (out: number) => Instruction): number => {
-    let slot = shared.get(key);
-    if (slot === undefined) {
-      slot = newSlot(false, vary);
-      shared.set(key, slot);
-      code.push(make(slot));
-    }
-    return slot;
-  };
-
-  const sum = (refs: readonly SlotRef[]): SlotRef => {
-    const live = refs.filter((r): r is NonNullable<SlotRef> => r !== null);
-    if (live.length === 0) return null;
-    if (live.length === 1) return live[0]!;
-    const terms = live.map((r) => r.slot);
-    const negs = live.map((r) => r.neg);
-    const key = `s${live.map((r) => (r.neg ? '-' : '+') + r.slot).join('')}`;
-    const slot = emit(key, terms.some((t) => varies[t]), (out) => ({ op: 'sum', out, terms, negs }));
-    return { slot, neg: false };
-  };
-
-  const product = (a: SlotRef, b: SlotRef): SlotRef => {
-    if (a === null || b === null) return null;
-    const neg = a.neg !== b.neg;
-    if (isOne(a)) return { slot: b.slot, neg };
-    if (isOne(b)) return { slot: a.slot, neg };
-    if (a.slot === b.slot) {
-      const slot = emit(`q${a.slot}`, varies[a.slot]!, (out) => ({ op: 'sqr', out, a: a.slot }));
-      return { slot, neg }; // (−a)·a = −a², (−a)·(−a) = a²
-    }
-    const [x, y] = a.slot < b.slot ? [a.slot, b.slot] : [b.slot, a.slot];
-    // keep a point operand first so the emitters can scale instead of multiplying rectangles
-    const [p, q] = isPoint[y] && !isPoint[x] ? [y, x] : [x, y];
-    const slot = emit(`m${x},${y}`, varies[x]! || varies[y]!, (out) => ({ op: 'mul', out, a: p, b: q }));
-    return { slot, neg };
-  };
-
-  const power = (base: SlotRef, exponent: number): SlotRef => {
-    let result: SlotRef = one();
-    let square = base;
-    for (let e = exponent; e > 0; e >>= 1) {
-      if (e & 1) result = product(result, square);
-      if (e > 1) square = product(square, square);
-    }
-    return result;
-  };
-
   const memo = new Map<ExprNode, SlotRef>();
   const lower = (node: ExprNode): SlotRef => {
     const cached = memo.get(node);
@@ -121,68 +51,28 @@ export function lowerSystem(system: PolynomialSystem): StraightLineProgram {
     switch (node.kind) {
       case 'const':
         if (node.im !== 0) realConstants = false;
-        if (node.re === 0 && node.im === 0) ref = null;
-        else if (node.im === 0 && Math.abs(node.re) === 1) ref = one(node.re < 0);
-        else ref = { slot: constantSlot(node.re, node.im), neg: false };
+        ref = builder.constant(node.re, node.im);
         break;
-      case 'param':
-        ref = { slot: leaf(`p${node.index}`, (slot) => parameters.push({ slot, index: node.index })), neg: false };
-        break;
+      case 'param': ref = builder.parameter(node.index); break;
       case 'unknown':
         if (!(node.index >= 0 && node.index < n)) throw new RangeError(`unknown ${node.name} has index ${node.index}, outside 0…${n - 1}`);
-        ref = { slot: emit(`u${node.index}`, true, (out) => ({ op: 'load', out, index: node.index })), neg: false };
+        ref = builder.load(node.index);
         break;
-      case 'add':
-        ref = sum(node.terms.map(lower));
-        break;
+      case 'add': ref = builder.sum(node.terms.map(lower)); break;
       case 'neg': {
         const r = lower(node.arg);
         ref = r === null ? null : { slot: r.slot, neg: !r.neg };
         break;
       }
-      case 'mul':
-        ref = node.factors.map(lower).reduce<SlotRef>((acc, f) => product(acc, f), one());
-        break;
-      case 'pow':
-        ref = power(lower(node.base), node.exponent);
-        break;
+      case 'mul': ref = node.factors.map(lower).reduce<SlotRef>((acc, f) => builder.product(acc, f), builder.one()); break;
+      case 'pow': ref = builder.power(lower(node.base), node.exponent); break;
     }
     memo.set(node, ref);
     return ref;
   };
-
   const values = system.equations.map(lower);
-  code = backward;
-  const jacobian: SlotRef[] = new Array<SlotRef>(n * n).fill(null);
-  const flip = (r: SlotRef, neg: boolean): SlotRef => (r === null || !neg ? r : { slot: r.slot, neg: !r.neg });
-  values.forEach((root, i) => {
-    if (root === null || !varies[root.slot]) return;
-    const adjoint = new Map<number, SlotRef[]>([[root.slot, [one(root.neg)]]]);
-    const push = (slot: number, r: SlotRef): void => {
-      if (r === null || !varies[slot]) return;
-      const list = adjoint.get(slot);
-      if (list) list.push(r); else adjoint.set(slot, [r]);
-    };
-    for (let k = forward.length - 1; k >= 0; k--) {
-      const ins = forward[k]!;
-      const list = adjoint.get(ins.out);
-      if (list === undefined) continue;
-      const bar = sum(list);
-      switch (ins.op) {
-        case 'load': jacobian[i * n + ins.index] = bar; break;
-        case 'sum': ins.terms.forEach((t, j) => push(t, flip(bar, ins.negs[j]!))); break;
-        case 'mul':
-          push(ins.a, product(bar, { slot: ins.b, neg: false }));
-          push(ins.b, product(bar, { slot: ins.a, neg: false }));
-          break;
-        case 'sqr': {
-          const half = product(bar, { slot: ins.a, neg: false });
-          push(ins.a, half);
-          push(ins.a, half);
-          break;
-        }
-      }
-    }
-  });
+  builder.code = backward;
+  const jacobian = differentiate(builder, forward, values, n);
+  const { isPoint, constants, parameters } = builder;
   return { unknownCount: n, slotCount: isPoint.length, isPoint, constants, parameters, forward, backward, values, jacobian, realConstants };
 }
