@@ -52,7 +52,7 @@ export interface PathEnd {
   readonly residual: number;
   /** Condition estimate of ∂H/∂x at the endpoint (Infinity when singular). */
   readonly condition: number;
-  /** Estimated winding number (multiplicity indicator) from the endgame; 1 for regular ends. */
+  /** Estimated winding number (multiplicity indicator) from the endgame; 1 for regular ends; 0 when undetermined. */
   readonly windingNumber: number;
   /** Accepted predictor–corrector steps. */
   readonly steps: number;

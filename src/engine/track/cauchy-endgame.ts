@@ -7,6 +7,9 @@ import { distInf, normInf } from '../complex/packed.ts';
  */
 export const ENDPOINT_RESIDUAL = 1e-8;
 
+/** Past this condition estimate of ∂H/∂x at a sample, moving closer to the end is pointless in double precision. */
+const HOPELESS_CONDITION = 1e12;
+
 /** Result of the endgame: status, estimated winding number, and whether the path was seen to diverge. */
 export interface EndgameResult {
   status: SegmentStatus;
@@ -39,7 +42,9 @@ const VALUATION_SPREAD = 1.1;
  * 1e-6; no closure within maxWinding turns gives no estimate at this radius); the end value is the mean of the
  * m·c equally spaced samples (trapezoid rule for Cauchy's integral formula in s^{1/c}). Accepted when two
  * successive estimates with the same c agree to endgameTolerance and the estimate's residual passes
- * ENDPOINT_RESIDUAL. Writes the estimate (or, diverging, the last sample) into x. Buffers made once here.
+ * ENDPOINT_RESIDUAL. The radii stop early where the condition estimate passes 1e12. Without any loop
+ * estimate, a last sample that Newton at the end brings to a residual ≤ ENDPOINT_RESIDUAL is a singular end
+ * of undetermined winding number (reported as 0). Writes the estimate (or, diverging, the last sample) into x.
  */
 export function createCauchyEndgame(stepper: Stepper, infinityDistance?: (x: Float64Array) => number): (x: Float64Array, endRe: number, endIm: number, uRe: number, uIm: number, r0: number) => EndgameResult {
   const len = 2 * stepper.n;
@@ -75,6 +80,8 @@ export function createCauchyEndgame(stepper: Stepper, infinityDistance?: (x: Flo
       if (stepStatus !== 'ok') return fail(stepStatus);
       r = rNext;
       if (infinityDistance && diverging(infinityDistance(x))) return done(1, true);
+      stepper.residual(x, endRe + r * uRe, endIm + r * uIm); // condition estimate at this sample
+      if (stepper.condition > HOPELESS_CONDITION) break;
       if (!inZone) {
         const d = distInf(x, start);
         cc[0] = cc[1]!; cc[1] = cc[2]!; cc[2] = Math.log(s.radiusRatio) / Math.log(d / step);
@@ -83,7 +90,14 @@ export function createCauchyEndgame(stepper: Stepper, infinityDistance?: (x: Flo
         inZone = (lo > 0.5 && hi <= 1.05 * lo) || d <= 1e-12 * (1 + normInf(x));
       }
     }
-    if (havePrevious) x.set(previous);
+    if (havePrevious) {
+      x.set(previous);
+      return fail('no-convergence');
+    }
+    // No loop estimate: a singular end whose loops never settled (a positive-dimensional solution set, say).
+    // Accept it as singular with an undetermined winding number (0) when Newton at the end leaves a tiny residual.
+    stepper.newton(x, endRe, endIm, s.finalTolerance, 8);
+    if (stepper.residual(x, endRe, endIm) <= ENDPOINT_RESIDUAL) return done(0, false);
     return fail('no-convergence');
 
     /** Records the next distance to infinity and applies the divergence test. */

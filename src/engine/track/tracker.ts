@@ -19,6 +19,7 @@ export interface Tracker {
    * approach to tEnd (≤ 40 attempts, aborted when the condition estimate passes singularCondition); else the
    * Cauchy endgame. A failed path is re-tracked up to settings.retries times with stricterSettings; steps and
    * rejections are summed over all attempts. Outcome 'at-infinity' needs homotopy.infinityDistance.
+   * windingNumber is 0 for a singular end whose loops never settled (undetermined).
    */
   track(start: Float64Array, tStart?: number, tEnd?: number): PathEnd;
 }
@@ -80,7 +81,7 @@ export function createTracker(homotopy: Homotopy, settings: Partial<TrackerSetti
     let outcome: PathOutcome;
     if (failure !== undefined) outcome = 'failed';
     else if (diverged || (homotopy.infinityDistance?.(x) ?? Infinity) <= INFINITY_TOLERANCE) outcome = 'at-infinity';
-    else outcome = winding > 1 || !(condition <= base.singularCondition) ? 'singular' : 'regular';
+    else outcome = winding !== 1 || !(condition <= base.singularCondition) ? 'singular' : 'regular';
     const end: PathEnd = { outcome, point: x, residual, condition, windingNumber: winding, steps, rejectedSteps, retries };
     return failure === undefined ? end : { ...end, failure };
   }
