@@ -66,7 +66,7 @@ describe('determinism', () => {
       parameters: ['a', 'b'],
       equations: [sub(add(pow(x, 2), pow(y, 2)), param('a', 0)), sub(mul(x, y), param('b', 1))],
     };
-    for (const [a, b] of [[5, 2], [10, 3]]) {
+    for (const [a, b] of [[5, 2], [10, 3]] as const) {
       const p = new Float64Array([a, 0, b, 0]);
       const pooled = await solveSystem(conics, p, { seed: 3, workers: 2 });
       expect(bytes(pooled)).toBe(bytes(await solveSystem(conics, p, { seed: 3 })));
