@@ -1,4 +1,4 @@
-// npm run bench [-- --runs N] [-- --only <substring>] [-- --json]
+// npm run bench [-- --runs N] [-- --only <substring>] [-- --suite <name>] [-- --json]
 // Runs every case exported (as `cases`, or any exported array of cases) by every generators/bench/*-suite.ts (found by name, sorted) --runs times (default 5) and
 // prints a table, or with --json ONLY a JSON array of {name, cores, runs, medianSeconds, paths, found, expected, failedPaths}.
 import { readdirSync } from 'node:fs';
@@ -10,7 +10,8 @@ import { formatTable, type BenchRow } from './bench-table.ts';
 
 const options = parseBenchArguments(process.argv.slice(2));
 const here = new URL('.', import.meta.url);
-const suiteFiles = readdirSync(here).filter((f) => f.endsWith('-suite.ts')).sort();
+const suiteFiles = readdirSync(here).filter((f) => f.endsWith('-suite.ts') && (options.suite === undefined || f === `${options.suite}-suite.ts`)).sort();
+if (suiteFiles.length === 0) throw new Error(`no bench suite file generators/bench/${options.suite}-suite.ts`);
 const cases: BenchCase[] = [];
 for (const file of suiteFiles) {
   const module = (await import(new URL(file, here).href)) as Record<string, unknown>;
