@@ -1,7 +1,7 @@
 import { widenDown, widenUp } from './outward.ts';
 
-const U2 = 2 ** -52; // twice the unit roundoff u = 2⁻⁵³
-const TINY = 2 ** -1074; // the least subnormal: bounds the underflow error of one product (≤ TINY / 2)
+const U2 = Number.EPSILON; // 2⁻⁵², twice the unit roundoff u = 2⁻⁵³
+const TINY = Number.MIN_VALUE; // 2⁻¹⁰⁷⁴, the least subnormal: bounds the underflow error of one product (≤ TINY / 2)
 
 /**
  * Encloses a dot product of exact doubles aₖ with intervals [cₖ − rₖ, cₖ + rₖ] (midpoint–radius form, Rump 1999),

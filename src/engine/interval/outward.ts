@@ -7,8 +7,8 @@
  * than the bit-pattern route. Infinities as for nextUp: widenUp(+∞) = +∞, widenUp(−∞) = −MAX_VALUE (the sum is NaN
  * only then, so the check costs one compare); NaN stays NaN.
  */
-const SPACING = 2 ** -52;
-const TINY = 2 ** -1074;
+const SPACING = Number.EPSILON; // 2⁻⁵², exactly
+const TINY = Number.MIN_VALUE; // 2⁻¹⁰⁷⁴, exactly
 
 /** A double ≥ nextUp(x), within a few floats; NaN only for NaN. */
 export function widenUp(x: number): number {
