@@ -7,6 +7,7 @@ import { CONIC_LETTERS, parameterNames } from './conic-names.ts';
 import { tangencyPoint, type ConicCoefficients } from './conic-geometry.ts';
 import { tangencyDiscriminant } from './sextic-formulation.ts';
 import { loadStartSet } from './start-set.ts';
+import { naiveRunSentence } from './naive-run-note.ts';
 import { tangencyAlternateCharts } from './tangency-rechart.ts';
 import { isRealPoint } from '../../../src/engine/solve/real.ts';
 import type { TangencyShape } from './tangency-layout.ts';
@@ -115,8 +116,8 @@ export function conicTangencyProblem(points: number, seeds: { generic: number; s
     excessNote: k <= 2
       ? `None: with at most two tangency conditions the naive count $6^{${k}} = ${bound}$ is exact, because the conics through ${plural(points, 'general point')} form a family that misses the double lines.`
       : [
-        `The naive count $6^{${k}} = ${bound}$ exceeds $${count}$ because every double line $(\\alpha x + \\beta y + \\gamma)^2$ is "tangent" to every conic: its matrix has rank one, so $\\det(sA + tU)$ has a double root in $t$ at $s = 0$ and the tangency discriminant vanishes there, to higher order.`,
-        `The double lines form a surface (the Veronese surface) in $\\mathbb{P}^5$${points > 0 ? `, which the ${plural(points, 'point condition')} cut down` : ''}; ${bound - count} of the naive count's solutions are absorbed there as an excess component, and only the ${count} genuine conics remain isolated.`,
+        `The naive count $6^{${k}} = ${bound}$ exceeds $${count}$ because every double line $(\\alpha x + \\beta y + \\gamma)^2$ is "tangent" to every conic: its matrix has rank one, so the binary cubic $\\det(sA + tU)$ has the double root $(s : t) = (0 : 1)$ and the tangency discriminant vanishes, to higher order.`,
+        `The double lines form a surface (the Veronese surface) in $\\mathbb{P}^5$${points > 0 ? `, which the ${plural(points, 'point condition')} cut down` : ''}; ${bound - count} of the naive count's solutions are absorbed there as an excess component, and only the ${count} genuine conics remain isolated.${naiveRunSentence(conicLadderSlug(points))}`,
       ].join(' '),
     instances: [
       { id: 'generic', kind: 'generic', label: 'Random complex data', description: 'Points and conics with coefficients drawn as random complex numbers from the recorded seed.', seed: seeds.generic },

@@ -2,6 +2,7 @@
 import { writeFileSync, renameSync } from 'node:fs';
 import { join } from 'node:path';
 import { closeSharedPool } from '../../../src/engine/pool/shared-pool.ts';
+import { ENGINE_VERSION } from '../../../src/engine/version.ts';
 import { COMMITTED_DIR } from './start-set.ts';
 import { naiveRun } from './naive-run.ts';
 import fiveConics from './conics-tangent-to-5-conics.ts';
@@ -12,7 +13,7 @@ export const NAIVE_SUMMARY_FILE = join(COMMITTED_DIR, 'naive-run-conics-tangent-
 if (process.argv[1] !== undefined && import.meta.url.endsWith(process.argv[1].split('/').pop()!)) {
   const workers = Number(process.argv[2] ?? 2);
   const summary = await naiveRun(fiveConics, 'generic', 1, workers);
-  const sorted = Object.fromEntries(Object.entries({ ...summary, seconds: Number(summary.seconds.toFixed(1)), workers }).sort(([a], [b]) => a.localeCompare(b)));
+  const sorted = Object.fromEntries(Object.entries({ ...summary, seconds: Number(summary.seconds.toFixed(1)), workers, engineVersion: ENGINE_VERSION }).sort(([a], [b]) => a.localeCompare(b)));
   writeFileSync(`${NAIVE_SUMMARY_FILE}.tmp`, `${JSON.stringify(sorted, null, 2)}\n`);
   renameSync(`${NAIVE_SUMMARY_FILE}.tmp`, NAIVE_SUMMARY_FILE);
   console.log(sorted);
