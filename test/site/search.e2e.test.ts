@@ -35,7 +35,7 @@ async function search(page: Page, query: string): Promise<string[]> {
   await input.waitFor();
   await input.fill(query);
   const links = page.locator('pagefind-searchbox a[href*="/problems/"]');
-  await links.first().waitFor({ timeout: 15_000 });
+  await links.first().waitFor({ timeout: 20_000 });
   return links.evaluateAll((as) => as.map((a) => (a as HTMLAnchorElement).getAttribute('href') ?? ''));
 }
 
@@ -56,11 +56,13 @@ describe('search', () => {
   it('finds the Apollonius page for "tangent circles" and its page shows the ladder and 3 given + 8 solution circles', async () => {
     const page = await open('/');
     await search(page, 'tangent circles');
-    const first = page.locator('pagefind-searchbox a[href*="/problems/"]').first();
-    await expect.poll(() => first.textContent()).toContain('Circles tangent to three circles');
-    await first.click();
-    await page.waitForURL(/\/problems\/[a-z0-9-]+\/$/);
-    await expect.poll(() => page.locator('h1').textContent()).toBe('Circles tangent to three circles');
+    const results = page.locator('pagefind-searchbox a[href*="/problems/"]');
+    const hit = results.filter({ hasText: 'Circles tangent to three circles' }).first();
+    await hit.waitFor({ timeout: 20_000 });
+    await expect.poll(() => results.first().textContent(), { timeout: 10_000 }).toContain('Circles tangent to three circles');
+    await hit.click();
+    await page.waitForURL(/\/problems\/[a-z0-9-]+\/$/, { timeout: 20_000 });
+    await expect.poll(() => page.locator('h1').textContent(), { timeout: 10_000 }).toBe('Circles tangent to three circles');
     const ladder = page.locator('[data-count-ladder]').first();
     expect(await ladder.locator('li[data-step]').evaluateAll((li) => li.map((l) => l.getAttribute('data-step'))))
       .toEqual(expect.arrayContaining(['bezout', 'true', 'found', 'certified', 'real', 'certifiedReal']));
@@ -95,7 +97,7 @@ describe('problem page', () => {
     const box = (await fig.locator('svg').boundingBox())!;
     await page.mouse.move(box.x + box.width / 2, box.y + box.height / 2);
     await page.mouse.wheel(0, -400);
-    await expect.poll(() => fig.locator('g.viewport').getAttribute('transform')).toMatch(/scale\((?!1\))/);
+    await expect.poll(() => fig.locator('g.viewport').getAttribute('transform'), { timeout: 10_000 }).toMatch(/scale\((?!1\))/);
     expect((page as Page & { errors?: string[] }).errors).toEqual([]);
     await page.close();
   });
