@@ -16,4 +16,4 @@ export type { SolveOptions, FoundSolution, PathStatistics, SolveReport, SolveBou
 export { createAffineTools, type AffineTools } from './solve/affine.ts';
 export { sharedPool, closeSharedPool } from './pool/shared-pool.ts';
 export type { PathJob, TrackingPool } from './pool/job.ts';
-export { trackBatch } from './pool/track-batch.ts';
+export { trackBatch, trackStarts } from './pool/track-batch.ts';

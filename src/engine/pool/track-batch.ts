@@ -18,11 +18,16 @@ export async function trackBatch(job: PathJob, onPath?: (done: number) => void):
     tracker = createTracker(module.createHomotopy(job.args), job.settings);
     cached = key === null ? null : { key, tracker };
   }
+  return trackStarts(tracker, job.starts, job.tStart ?? 0, job.tEnd ?? 1, onPath);
+}
+
+/** Tracks the packed start points one after another with the tracker; ends in start order; onPath(done) after each. */
+export function trackStarts(tracker: Tracker, starts: Float64Array, tStart = 0, tEnd = 1, onPath?: (done: number) => void): PathEnd[] {
   const len = 2 * tracker.stepper.n;
-  if (job.starts.length % len !== 0) throw new RangeError(`starts has length ${job.starts.length}, not a multiple of ${len}`);
+  if (starts.length % len !== 0) throw new RangeError(`starts has length ${starts.length}, not a multiple of ${len}`);
   const ends: PathEnd[] = [];
-  for (let k = 0; k < job.starts.length / len; k++) {
-    ends.push(tracker.track(job.starts.subarray(k * len, (k + 1) * len), job.tStart ?? 0, job.tEnd ?? 1));
+  for (let k = 0; k < starts.length / len; k++) {
+    ends.push(tracker.track(starts.subarray(k * len, (k + 1) * len), tStart, tEnd));
     onPath?.(k + 1);
   }
   return ends;

@@ -3,8 +3,9 @@ import type { PathEnd } from '../homotopy.ts';
 import { compileSystem } from '../compile/compile-system.ts';
 import { bezoutBound, multihomogeneousBound } from '../start/bounds.ts';
 import { planHomotopy } from '../start/plan.ts';
-import { COMPILED_HOMOTOPY_MODULE } from '../homotopies/compiled-module.ts';
-import { trackBatch } from '../pool/track-batch.ts';
+import { COMPILED_HOMOTOPY_MODULE, createHomotopy } from '../homotopies/compiled-module.ts';
+import { trackStarts } from '../pool/track-batch.ts';
+import { createTracker } from '../track/tracker.ts';
 import { sharedPool } from '../pool/shared-pool.ts';
 import type { PathJob } from '../pool/job.ts';
 import { createAffineTools } from './affine.ts';
@@ -40,7 +41,8 @@ export async function solveSystem(system: PolynomialSystem, parameters: Float64A
   const workers = options.workers ?? 0;
   let raw: PathEnd[];
   if (workers > 0) raw = await (await sharedPool(workers)).track(job, options.onProgress);
-  else raw = await trackBatch(job, (done) => options.onProgress?.(done, last - first));
+  // in-process: the same homotopy and tracker a worker builds, without importing the module by URL (bundlers)
+  else raw = trackStarts(createTracker(createHomotopy(plan.args)), job.starts, 0, 1, (done) => options.onProgress?.(done, last - first));
   const tools = createAffineTools(compileSystem(system), parameters);
   const ends = raw.map((e) => toAffineEnd(e, plan.projectiveGroups, system.unknowns.length, tools));
   const report = collectSolutions(system, parameters, ends, bounds, first);
