@@ -118,13 +118,13 @@ export function pointLineProblem(p: number, genericSeed: number, demo: PointLine
       },
     },
     excessNote:
-      l <= 2
-        ? `None: with at most two tangency conditions the linear conditions leave a small enough family that the $${bound}$ paths of the naive count all end at distinct genuine conics.`
+      bound === count
+        ? `None: the naive count $${bound}$ is exact. ${l === 0 ? 'Five point conditions are linear and cut out a single conic.' : `The tangency equation also holds on degenerate conics (double lines, and line pairs crossing on the given line), but none of them passes through ${p} general points and meets the other conditions.`}`
         : [
             `The naive count $2^{${l}} = ${bound}$ exceeds the true count $${count}$ because every double line $(\\alpha x + \\beta y + \\gamma)^2$ satisfies every tangency equation: its matrix has rank one, so $\\operatorname{adj}(M) = 0$.`,
             p === 2
-              ? 'Through the two points there is exactly one double line, and the surplus paths all converge to it as singular endpoints.'
-              : `The double lines through the ${p === 1 ? 'point form a curve' : 'plane form a surface'} of such spurious solutions; the surplus paths end on it as singular points, or at points of it that lie on the chart's hyperplane at infinity.`,
+              ? 'Through the two points there is exactly one double line, and all the surplus paths converge to it as singular endpoints (one cluster of multiplicity $4$).'
+              : `The double lines ${p === 1 ? 'through the point form a curve (a conic in $\\mathbb{P}^5$)' : 'form a surface (the Veronese surface in $\\mathbb{P}^5$)'} of spurious solutions. In our runs all $${bound - count}$ surplus paths end on it at singular points, none at infinity of the chart.`,
           ].join(' '),
     instances: [
       genericInstance('Random complex points and lines', genericSeed, 'Point coordinates and line coefficients'),
