@@ -144,6 +144,21 @@ describe('problem page', () => {
   });
 });
 
+describe('without JavaScript', () => {
+  it('still shows the whole figure, with the toggle buttons hidden', async () => {
+    const path = await apolloniusPath();
+    const context = await browser.newContext({ javaScriptEnabled: false });
+    const page = await context.newPage();
+    await page.goto(server.url + path);
+    const fig = page.locator('plane-figure').first();
+    expect(await fig.getAttribute('data-ready')).toBeNull();
+    expect(await fig.locator('circle[data-layer="solution"]').count()).toBe(8);
+    expect(await fig.locator('circle[data-layer="solution"]').first().isVisible()).toBe(true);
+    expect(await fig.locator('.figure-tools').isVisible()).toBe(false);
+    await context.close();
+  });
+});
+
 describe('home page', () => {
   it('lists every problem in the chart and in the table', async () => {
     const dir = `${ROOT}dist/problems`;
