@@ -42,9 +42,9 @@ const VALUATION_SPREAD = 1.1;
  * 1e-6; no closure within maxWinding turns gives no estimate at this radius); the end value is the mean of the
  * m·c equally spaced samples (trapezoid rule for Cauchy's integral formula in s^{1/c}). Accepted when two
  * successive estimates with the same c agree to endgameTolerance and the estimate's residual passes
- * ENDPOINT_RESIDUAL. The radii stop early where the condition estimate passes 1e12. Without any loop
- * estimate, a last sample that Newton at the end brings to a residual ≤ ENDPOINT_RESIDUAL is a singular end
- * of undetermined winding number (reported as 0). Writes the estimate (or, diverging, the last sample) into x.
+ * ENDPOINT_RESIDUAL. The radii stop early where the condition estimate passes 1e12 or a step fails. Then the
+ * last loop estimate, or else the last good sample after Newton at the end, is a singular end when its
+ * residual is ≤ ENDPOINT_RESIDUAL (winding number: the last loop's, or 0 = undetermined); otherwise the path fails. Writes the estimate (or, diverging, the last sample) into x.
  */
 export function createCauchyEndgame(stepper: Stepper, infinityDistance?: (x: Float64Array) => number): (x: Float64Array, endRe: number, endIm: number, uRe: number, uIm: number, r0: number) => EndgameResult {
   const len = 2 * stepper.n;
@@ -62,7 +62,10 @@ export function createCauchyEndgame(stepper: Stepper, infinityDistance?: (x: Flo
     for (let k = 0; k < 2 * s.maxRounds; k++) {
       if (inZone) {
         const winding = loop(x, r);
-        if (winding < 0) return fail(stepStatus);
+        if (winding < 0) {
+          x.set(start); // the loop's start: the last good sample
+          break;
+        }
         if (winding > 0) {
           if (havePrevious && winding === lastWinding && distInf(estimate, previous) <= s.endgameTolerance * (1 + normInf(estimate))
             && stepper.residual(estimate, endRe, endIm) <= ENDPOINT_RESIDUAL) {
@@ -77,7 +80,10 @@ export function createCauchyEndgame(stepper: Stepper, infinityDistance?: (x: Flo
       start.set(x);
       const rNext = r * s.radiusRatio;
       stepStatus = stepper.segment(x, endRe + r * uRe, endIm + r * uIm, endRe + rNext * uRe, endIm + rNext * uIm);
-      if (stepStatus !== 'ok') return fail(stepStatus);
+      if (stepStatus !== 'ok') {
+        x.set(start);
+        break;
+      }
       r = rNext;
       if (infinityDistance && diverging(infinityDistance(x))) return done(1, true);
       stepper.residual(x, endRe + r * uRe, endIm + r * uIm); // condition estimate at this sample
@@ -90,15 +96,16 @@ export function createCauchyEndgame(stepper: Stepper, infinityDistance?: (x: Flo
         inZone = (lo > 0.5 && hi <= 1.05 * lo) || d <= 1e-12 * (1 + normInf(x));
       }
     }
-    if (havePrevious) {
+    // No settled estimate before the radii ran out, the condition passed 1e12, or a step failed close to the end:
+    // the last loop estimate (else the last good sample, polished by Newton at the end) is accepted as a singular
+    // end when its residual is at most ENDPOINT_RESIDUAL, with the last winding number (0: undetermined).
+    if (havePrevious && stepper.residual(previous, endRe, endIm) <= ENDPOINT_RESIDUAL) {
       x.set(previous);
-      return fail('no-convergence');
+      return done(lastWinding, false);
     }
-    // No loop estimate: a singular end whose loops never settled (a positive-dimensional solution set, say).
-    // Accept it as singular with an undetermined winding number (0) when Newton at the end leaves a tiny residual.
     stepper.newton(x, endRe, endIm, s.finalTolerance, 8);
     if (stepper.residual(x, endRe, endIm) <= ENDPOINT_RESIDUAL) return done(0, false);
-    return fail('no-convergence');
+    return fail(stepStatus === 'ok' ? 'no-convergence' : stepStatus);
 
     /** Records the next distance to infinity and applies the divergence test. */
     function diverging(next: number): boolean {
