@@ -11,7 +11,8 @@ export interface BenchRow {
   readonly steps?: readonly number[];
 }
 
-const sortedMedian = (values: readonly number[]): number => {
+/** The median of the values (any order; NaN when empty). */
+export const sortedMedian = (values: readonly number[]): number => {
   const s = [...values].sort((a, b) => a - b);
   const m = s.length >> 1;
   return s.length === 0 ? NaN : s.length % 2 === 1 ? s[m]! : (s[m - 1]! + s[m]!) / 2;

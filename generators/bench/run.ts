@@ -6,7 +6,7 @@ import { availableParallelism } from 'node:os';
 import { closeSharedPool } from '../../src/engine/pool/shared-pool.ts';
 import type { BenchCase, BenchOutcome } from './bench-case.ts';
 import { parseBenchArguments } from './bench-arguments.ts';
-import { formatTable, type BenchRow } from './bench-table.ts';
+import { formatTable, sortedMedian, type BenchRow } from './bench-table.ts';
 
 const options = parseBenchArguments(process.argv.slice(2));
 const here = new URL('.', import.meta.url);
@@ -40,17 +40,11 @@ for (const c of selected) {
 }
 await closeSharedPool();
 if (options.json) {
-  process.stdout.write(`${JSON.stringify(rows.map(({ name, cores: k, runs, seconds, paths, found, expected, failedPaths: f }) => ({ name, cores: k, runs, medianSeconds: median(seconds), paths, found, expected, failedPaths: f })), null, 2)}\n`);
+  process.stdout.write(`${JSON.stringify(rows.map(({ name, cores: k, runs, seconds, paths, found, expected, failedPaths: f }) => ({ name, cores: k, runs, medianSeconds: sortedMedian(seconds), paths, found, expected, failedPaths: f })), null, 2)}\n`);
 } else {
   process.stdout.write(`${formatTable(rows)}\n`);
 }
 
 function isBenchCase(v: unknown): v is BenchCase {
   return typeof v === 'object' && v !== null && typeof (v as BenchCase).name === 'string' && typeof (v as BenchCase).run === 'function' && typeof (v as BenchCase).expected === 'number';
-}
-
-function median(values: readonly number[]): number {
-  const s = [...values].sort((a, b) => a - b);
-  const m = s.length >> 1;
-  return s.length % 2 === 1 ? s[m]! : (s[m - 1]! + s[m]!) / 2;
 }
