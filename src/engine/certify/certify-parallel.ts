@@ -68,7 +68,13 @@ export async function certifySolutionsParallel(
   const pointOptions = { ...(maxRadius === undefined ? {} : { maxRadius }), ...(attempts === undefined ? {} : { attempts }) };
   const key = keyOf(system);
   const pool = workersOf(size);
-  const workers = await pool.workers;
+  let workers: CertifyWorkers;
+  try {
+    workers = await pool.workers;
+  } catch {
+    shared = null; // no worker_threads here (e.g. a browser): certify in this thread
+    return localCertifier(system).certify(parameters, points, options);
+  }
   const batchSize = Math.max(16, Math.min(512, Math.ceil(points.length / (4 * size))));
   let next = 0;
   const results = await workers.runAll((w): CertifyBatch | null => {
