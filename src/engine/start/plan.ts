@@ -35,6 +35,8 @@ export function planHomotopy(system: PolynomialSystem, parameters: Float64Array,
   if (parameters.length !== 2 * np) {
     throw new RangeError(`expected ${np} parameter values (packed length ${2 * np}), got length ${parameters.length}`);
   }
+  const bad = parameters.findIndex((v) => !Number.isFinite(v));
+  if (bad >= 0) throw new RangeError(`parameter ${system.parameters[bad >> 1]} (index ${bad >> 1}) is not finite: ${parameters[bad]}`);
   if (kind === 'multihomogeneous' && !system.groups) throw new RangeError('a multihomogeneous start needs variable groups (system.groups)');
   const groups = validateGroups(system, kind === 'multihomogeneous' ? system.groups : undefined);
   const n = system.unknowns.length, N = n + groups.length;

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { PolynomialSystem } from '../../../src/engine/expr/node.ts';
-import { add, mul, pow, sub, unknown } from '../../../src/engine/expr/build.ts';
+import { add, mul, param, pow, sub, unknown } from '../../../src/engine/expr/build.ts';
 import { solveSystem } from '../../../src/engine/solve/solve-system.ts';
 
 const x = unknown('x', 0), y = unknown('y', 1);
@@ -58,5 +58,10 @@ describe('ends at infinity and singular ends', () => {
     expect(r.solutions).toHaveLength(1);
     close(r.solutions[0]!.point, [3, 0, 2, 0]);
     for (const s of r.singular) expect(Math.hypot(s.point[0]!, s.point[1]!)).toBeLessThan(1e-6);
+  });
+
+  it('names a parameter that is not finite', async () => {
+    const system: PolynomialSystem = { unknowns: ['x', 'y'], parameters: ['a'], equations: [sub(x, param('a', 0)), sub(y, 1)] };
+    await expect(solveSystem(system, new Float64Array([NaN, 0]), { seed: 1 })).rejects.toThrow(/parameter a \(index 0\) is not finite/);
   });
 });
