@@ -25,3 +25,8 @@ export async function atlasEntries(): Promise<AtlasEntry[]> {
   if (records.size > 0) throw new Error(`content: records without a page: ${[...records.keys()].sort().join(', ')}`);
   return out.sort((a, b) => a.record.slug.localeCompare(b.record.slug));
 }
+
+/** getStaticPaths for per-problem routes: one path per slug, the entry as props. */
+export async function problemPaths(): Promise<{ params: { slug: string }; props: { entry: AtlasEntry } }[]> {
+  return (await atlasEntries()).map((entry) => ({ params: { slug: entry.record.slug }, props: { entry } }));
+}
