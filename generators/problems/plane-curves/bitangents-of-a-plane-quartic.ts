@@ -6,12 +6,12 @@ import { substitute } from '../shared/univariate.ts';
 import type { PlaneWindow } from '../shared/contour.ts';
 import { planeCurveItems } from '../shared/plane-curve-items.ts';
 import { genericInstance } from '../shared/generic-instance.ts';
-import { normalizeByLargest } from '../shared/normalize.ts';
-import { imageLine, type ComplexMatrix2 } from '../shared/complex-chart.ts';
 import { coefficientsOf, linearForm, product, sum } from '../shared/numeric-polynomial.ts';
 
 const exponents = monomialExponents(2, 4);
 const names = coefficientNames('c', 2, 4);
+/** The line chart (x, y) = A·(t, mt + k) with A = [[1, −σ], [σ, 1]] (a scaled rotation when σ is real). */
+const chartNames = ['sigma'] as const;
 const view: PlaneWindow = { xMin: -3.2, xMax: 3.2, yMin: -3.2, yMax: 3.2 };
 
 /**
@@ -27,28 +27,25 @@ function demoQuartic(): number[] {
   return coefficientsOf(sum(product(ellipse(2, 1.1), ellipse(1.2, 2.1)), linearForm([0, 0], 0.04)), exponents);
 }
 
-const demoParameters: Record<string, ComplexInput> = Object.fromEntries(demoQuartic().map((c, m) => [names[m]!, c]));
+/**
+ * The demo's line chart: σ = tan(−0.12), a rotation by −0.12 rad (times a scale), so that the chart's missing
+ * direction (the image of the t = 0 axis, at about 83° from the x-axis) lies midway in the widest gap between
+ * the directions of the demo's 28 bitangents (measured: 14° from the nearest), keeping every slope m small.
+ * Real, so real lines have real chart coordinates and can be certified real.
+ */
+const demoChart = [Math.tan(-0.12)];
+
+const demoParameters: Record<string, ComplexInput> = Object.fromEntries([
+  ...demoQuartic().map((c, m) => [names[m]!, c] as const),
+  ...chartNames.map((n, i) => [n, Number(demoChart[i]!.toFixed(12))] as const),
+]);
 
 const curve = (q: Readonly<Record<string, number>>): FigureItem[] => planeCurveItems(q, names, exponents, view, 'the quartic', 220);
 
-/** The fixed complex chart of lines: (x, y) = A·(X, Y) with lines Y = mX + k; our own arbitrary non-real numbers. */
-export const lineChart: ComplexMatrix2 = [[1, 0], [0.35, 0.55], [-0.25, 0.45], [1, 0]];
-
-/**
- * The real points where the real line ux + vy + w = 0 touches the quartic, read off its restriction
- * q(t) = f(P + tD) = q₄(t² + αt + β)², α = q₃/(2q₄), β = (q₂/q₄ − α²)/2 (no solving); none if they are not real.
- */
-function contactPoints(q: Readonly<Record<string, number>>, u: number, v: number, w: number): [number, number][] {
-  const n = u * u + v * v;
-  if (!(n > 0)) return [];
-  const [px, py, dx, dy] = [(-w * u) / n, (-w * v) / n, -v, u];
-  const x = linearForm([dx], px), y = linearForm([dy], py);
-  const restricted = sum(...exponents.map(([i, j], m) => product(linearForm([0], q[names[m]!]!), ...Array(i!).fill(x), ...Array(j!).fill(y))));
-  const [q4, q3, q2] = ['4', '3', '2'].map((k) => restricted.get(k) ?? 0) as [number, number, number];
-  if (Math.abs(q4) < 1e-12) return [];
-  const alpha = q3 / (2 * q4), beta = (q2 / q4 - alpha * alpha) / 2, disc = alpha * alpha - 4 * beta;
-  if (disc < 0) return [];
-  return [(-alpha + Math.sqrt(disc)) / 2, (-alpha - Math.sqrt(disc)) / 2].map((t) => [px + t * dx, py + t * dy]);
+/** The point A·(t, mt + k) of the plane, for a real chart A read from the parameters. */
+function pointOnLine(q: Readonly<Record<string, number>>, m: number, k: number, t: number): [number, number] {
+  const Y = m * t + k;
+  return [t - q.sigma! * Y, q.sigma! * t + Y];
 }
 
 export default defineProblem({
@@ -60,14 +57,13 @@ export default defineProblem({
     'Find every line tangent to a general plane quartic $f(x, y) = \\sum c_{ij} x^i y^j = 0$ ($i + j \\le 4$) at two points. A smooth quartic has exactly $28$ bitangents; a real one has $28$, $16$, $8$ or $4$ real ones, and all $28$ are real when the curve has four ovals.',
   formulation: {
     unknowns: ['m', 'k', 'alpha', 'beta'],
-    parameters: names,
+    parameters: [...names, ...chartNames],
     groups: [['m', 'k'], ['alpha', 'beta']],
     equations: (u, q, ops) => {
       // On the line, (x, y) = A·(t, mt + k); q(t) = f(x, y) = Σ q_i t^i must equal q₄·(t² + αt + β)².
-      const c = (z: readonly [number, number]) => ops.constant(z[0], z[1]);
-      const [a11, a12, a21, a22] = lineChart;
-      const x = [ops.mul(c(a12), u.k!), ops.add(c(a11), ops.mul(c(a12), u.m!))];
-      const y = [ops.mul(c(a22), u.k!), ops.add(c(a21), ops.mul(c(a22), u.m!))];
+      // x = t − σ(mt + k), y = σt + (mt + k), as polynomials in t.
+      const x = [ops.neg(ops.mul(q.sigma!, u.k!)), ops.sub(1, ops.mul(q.sigma!, u.m!))];
+      const y = [u.k!, ops.add(q.sigma!, u.m!)];
       const inT = substitute(ops, names.map((n) => q[n]!), exponents, [x, y]);
       const [q0, q1, q2, q3, q4] = inT.map((coefficient, i) => {
         if (!coefficient) throw new Error(`bitangents-of-a-plane-quartic: the coefficient of t^${i} vanished identically`);
@@ -82,16 +78,12 @@ export default defineProblem({
       ];
     },
     description: [
-      'Lines are charted as $Y = mX + k$ in complex coordinates $(X, Y)$ with $(x, y) = A\\,(X, Y)$ for a fixed complex matrix $A$ of our own, so that no real line is at infinity of the chart.',
+      'Lines are charted as the points $A\\,(t,\\ mt + k)$ with $A = \\begin{pmatrix} 1 & -\\sigma \\\\ \\sigma & 1 \\end{pmatrix}$, where $\\sigma$ is part of the instance: random complex for generic instances, so that no line is special; for the demo a real value of our own, a rotation that keeps every real bitangent at a small slope.',
       'The line is a bitangent when $q(t) = f(A\\,(t,\\ mt + k))$ is a constant times a square, $q(t) = q_4(m)\\,(t^2 + \\alpha t + \\beta)^2$, the roots of $t^2 + \\alpha t + \\beta$ marking the two points of contact.',
       'Comparing the coefficients of $t^3, t^2, t, 1$ gives four equations of degrees $5, 6, 6, 6$ in $(m, k, \\alpha, \\beta)$: Bézout bound $1080$;',
       'with the groups $\\{m, k\\}$ and $\\{\\alpha, \\beta\\}$ (degrees $(4, 1), (4, 2), (4, 2), (4, 2)$) the two-homogeneous bound is $288$, which the solver uses.',
-      'Solutions are stored as the line $ux + vy + w = 0$, scaled so that its largest coefficient is $1$.',
+      'Solutions are stored in these chart coordinates $(m, k, \\alpha, \\beta)$.',
     ].join(' '),
-    coordinates: {
-      names: ['u', 'v', 'w'],
-      map: (x) => normalizeByLargest(imageLine(lineChart, [x[0]!, x[1]!], [x[2]!, x[3]!])),
-    },
   },
   trueCount: {
     value: 28,
@@ -101,7 +93,7 @@ export default defineProblem({
       year: 1839,
       title: 'Theorie der algebraischen Curven',
       venue: 'Adolph Marcus, Bonn',
-      note: 'Plücker’s formulas (1834) give ½d(d − 2)(d − 3)(d + 3) = 28 bitangents for d = 4; his 1839 book has the quartic with four ovals and 28 real bitangents. Details from memory.',
+      note: 'Plücker’s formulas (1834) give ½d(d − 2)(d − 3)(d + 3) = 28 bitangents for d = 4; his 1839 book has the quartic with four ovals and 28 real bitangents. The real counts 28, 16, 8, 4 are Zeuthen’s (1873). Details from memory.',
     },
   },
   excessNote: [
@@ -110,7 +102,7 @@ export default defineProblem({
     'lines escaping to infinity in the $(m, k)$ chart give more limits of the same kind. In our runs on random quartics all $260$ surplus paths of the two-homogeneous start, and all $1052$ of the total-degree start, end at infinity; the record counts them.',
   ].join(' '),
   instances: [
-    genericInstance('A random complex quartic', 20260108, 'All 15 coefficients'),
+    genericInstance('A random complex quartic', 20260108, 'All 15 coefficients and the chart parameter σ'),
     {
       id: 'stained-glass',
       kind: 'demo',
@@ -124,9 +116,18 @@ export default defineProblem({
   drawing: {
     window: () => view,
     configuration: curve,
-    solution: ([u, v, w], q) => [
-      { shape: 'line', a: u!, b: v!, c: w!, layer: 'solution' },
-      ...contactPoints(q, u!, v!, w!).map(([x, y]): FigureItem => ({ shape: 'point', x, y, layer: 'tangency' })),
-    ],
+    solution: ([m, k, alpha, beta], q) => {
+      const [p0, p1] = [pointOnLine(q, m!, k!, 0), pointOnLine(q, m!, k!, 1)];
+      const [dx, dy] = [p1[0] - p0[0], p1[1] - p0[1]];
+      const items: FigureItem[] = [{ shape: 'line', a: dy, b: -dx, c: dx * p0[1] - dy * p0[0], layer: 'solution' }];
+      const disc = alpha! * alpha! - 4 * beta!;
+      if (disc >= 0) {
+        for (const t of [(-alpha! + Math.sqrt(disc)) / 2, (-alpha! - Math.sqrt(disc)) / 2]) {
+          const [x, y] = pointOnLine(q, m!, k!, t);
+          items.push({ shape: 'point', x, y, layer: 'tangency' });
+        }
+      }
+      return items;
+    },
   },
 });
