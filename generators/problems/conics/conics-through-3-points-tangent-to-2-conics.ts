@@ -2,4 +2,5 @@ import { defineProblem } from '../../../src/atlas/definition.ts';
 import { conicTangencyProblem } from './conic-tangency-problem.ts';
 import { stageLightsDemo } from './stage-lights-demo.ts';
 
+/** The rung of the conic-tangency ladder (Chasles 1864) with its stage-lights demo; seeds of its generic instance and stored set. */
 export default defineProblem(conicTangencyProblem(3, { generic: 20261203, start: 3267 }, stageLightsDemo(3)));

@@ -21,8 +21,9 @@ export interface StartSet {
 
 const FORMAT = 'conic-tangency-start-set/1';
 const here = dirname(fileURLToPath(import.meta.url));
-/** Committed sets live beside the definitions; rebuilt ones are cached (gitignored). */
+/** Committed sets live beside the definitions. */
 export const COMMITTED_DIR = join(here, 'data');
+/** Sets rebuilt by monodromy are cached here (gitignored). */
 export const CACHE_DIR = join(here, '../../../.cache/conics');
 
 function fileStem(shape: TangencyShape): string {

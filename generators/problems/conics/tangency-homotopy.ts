@@ -39,7 +39,7 @@ export function createHomotopy(args: TangencyHomotopyArgs): Homotopy {
 
   function parametersAt(tRe: number, tIm: number): void {
     gammaArc(tRe, tIm, gRe, gIm, arc);
-    const [sr, si, dr, di] = arc as unknown as [number, number, number, number];
+    const sr = arc[0]!, si = arc[1]!, dr = arc[2]!, di = arc[3]!;
     for (let i = 0; i < 2 * np; i += 2) {
       const xr = delta[i]!, xi = delta[i + 1]!;
       par[i] = from[i]! + sr * xr - si * xi;

@@ -7,6 +7,7 @@ import { randomGamma, randomParameterPoint, reverseLeg, type LegTracker } from '
 /** Why discovery stopped: the known count was reached, a whole added node brought nothing new, or a budget ran out. */
 export type MonodromyStop = 'known-count' | 'saturated' | 'stalled' | 'path-budget' | 'node-budget';
 
+/** What monodromy discovery needs: a leg tracker, a solution-first seed, a random source, and optional counts and budgets. */
 export interface MonodromyOptions {
   readonly track: LegTracker;
   /** A start pair built solution-first: parameters (packed complex) and one solution for them. */
@@ -36,6 +37,7 @@ export interface MonodromyOptions {
   readonly tolerance?: number;
 }
 
+/** The solutions found at the best node, why discovery stopped, and path statistics that add up. */
 export interface MonodromyResult {
   readonly stop: MonodromyStop;
   /** The node with the most solutions: its parameters and solutions (packed complex). */

@@ -27,6 +27,7 @@ export interface ParameterProblem {
   readonly alternateCharts?: AlternateCharts;
 }
 
+/** Options of solveByParameterHomotopy: the seed of the gamma (and detour point), the route, tracker settings and trackers. */
 export interface ParameterSolveOptions {
   /** Seeds the route's random parameter point and gammas. Same seed ⇒ same report. */
   readonly seed: number;
@@ -44,9 +45,9 @@ export interface ParameterSolveOptions {
   readonly trackerFor?: (ref: HomotopyModuleRef) => Promise<LegTracker>;
 }
 
-/** SolveReport with the parameter-homotopy start and the jump check's counts. */
 export type { AlternateCharts } from './chart-retry.ts';
 
+/** SolveReport with the parameter-homotopy start and the jump check's counts. */
 export interface ParameterSolveReport extends Omit<SolveReport, 'startSystem'> {
   readonly startSystem: 'parameter-homotopy';
   /** Starts re-tracked with safe settings because two paths met; regular ends still coinciding afterwards. */
