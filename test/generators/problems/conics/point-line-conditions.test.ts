@@ -53,7 +53,7 @@ describe('conics through points and tangent to lines: the conditions', () => {
 });
 
 // Seeds whose strict check fails through an engine issue reported to the lead (minimal failing cases).
-const engineIssues: Record<number, number[]> = { 1: [10, 19] };
+const engineIssues: Record<number, number[]> = {};
 
 // The characteristic numbers of conics 1, 2, 4, 4, 2, 1 (Chasles 1864; Bashelor–Ksir–Traves, Amer. Math.
 // Monthly 115 (2008)). The surplus paths of the naive count 2^(5−p) must all end singular, on the double lines
