@@ -1,6 +1,6 @@
 import { existsSync, readFileSync } from 'node:fs';
 import { canonicalJson } from '../../src/atlas/canonical-json.ts';
-import { describeChange, utcDate } from '../../src/atlas/history.ts';
+import { describeChange, describeFirst, utcDate } from '../../src/atlas/history.ts';
 import { parseRecord } from '../../src/atlas/read-record.ts';
 import { solveRecordSchema, type SolveRecord } from '../../src/atlas/record.ts';
 import { formatIssues } from '../../src/atlas/validation-issue.ts';
@@ -28,7 +28,7 @@ export type PublishOutcome =
  * Writes a freshly solved record (its history is ignored) and its page under the content root. The published
  * record's history is carried over; identical bytes are not rewritten (the page is rewritten only if it differs);
  * a worse record (or one with an instance that found nothing though its count is positive) is refused unless
- * `force`; a replacement appends a history entry. Record first, then page, each
+ * `force`; the first publication and every replacement append a dated history entry. Record first, then page, each
  * atomically. A published record that cannot be read is an AtlasError('content') unless `force`.
  */
 export function publish(root: string, fresh: SolveRecord, options: PublishOptions = {}): PublishOutcome {
@@ -47,13 +47,12 @@ export function publish(root: string, fresh: SolveRecord, options: PublishOption
   }
   const reasons = [...emptyReasons(record), ...(published ? regressionReasons(published, record) : [])];
   if (reasons.length > 0 && !options.force) return { status: 'refused', reasons };
-  let change = '';
-  if (published) {
-    change = describeChange(published, record) + (reasons.length > 0 ? ` (forced over: ${reasons.join('; ')})` : '');
-    const entry = { date: options.date ?? utcDate(), engineVersion: record.engineVersion, change };
-    record = { ...record, history: [...record.history, entry] };
-    text = canonicalJson(record);
-  }
+  const change = published
+    ? describeChange(published, record) + (reasons.length > 0 ? ` (forced over: ${reasons.join('; ')})` : '')
+    : describeFirst(record) + (reasons.length > 0 ? ` (forced over: ${reasons.join('; ')})` : '');
+  const entry = { date: options.date ?? utcDate(), engineVersion: record.engineVersion, change };
+  record = { ...record, history: [...record.history, entry] };
+  text = canonicalJson(record);
   const check = solveRecordSchema.safeParse(record);
   if (!check.success) throw new AtlasError('solve', `internal error: the new record of "${record.slug}" fails its schema at ${check.error.issues[0]!.path.join('.')}: ${check.error.issues[0]!.message}; nothing written`);
   writeFileAtomic(file, text, options.beforeRename);

@@ -2,7 +2,7 @@ import type { PageFrontmatter } from '../../src/atlas/page-frontmatter.ts';
 import type { SolveRecord } from '../../src/atlas/record.ts';
 import { mdxText } from './mdx-text.ts';
 
-/** The frontmatter of a record's page: recordVersion = history entries + 1; bound and count of the first instance. */
+/** The frontmatter of a record's page: recordVersion = number of history entries (1 on first publication); bound and count of the first instance. */
 export function pageFrontmatter(record: SolveRecord): PageFrontmatter {
   return {
     slug: record.slug,
@@ -11,7 +11,7 @@ export function pageFrontmatter(record: SolveRecord): PageFrontmatter {
     tags: [...record.tags],
     bezoutBound: record.instances[0]!.counts.bezoutBound,
     trueCount: record.trueCount,
-    recordVersion: record.history.length + 1,
+    recordVersion: Math.max(1, record.history.length),
     engineVersion: record.engineVersion,
   };
 }

@@ -24,6 +24,15 @@ export function describeChange(previous: SolveRecord, next: SolveRecord): string
   return parts.length > 0 ? parts.join('; ') : 're-solved with the same counts (solution digits, notes or figure changed)';
 }
 
+/** The history entry's words for a record's first publication: per instance, found of the true count, certified and real. */
+export function describeFirst(record: SolveRecord): string {
+  const parts = record.instances.map((i) => {
+    const of = i.counts.trueCount === null ? '' : ` of ${i.counts.trueCount}`;
+    return `${i.id}: found ${i.counts.found}${of}, certified ${i.counts.certified}, real ${i.counts.real}`;
+  });
+  return `first published; ${parts.join('; ')}`;
+}
+
 /** Today's date in UTC as YYYY-MM-DD, or the override (for tests: env ATLAS_TODAY), which must have that form. */
 export function utcDate(now: Date = new Date(), override: string | undefined = process.env.ATLAS_TODAY): string {
   if (override !== undefined && override !== '') {

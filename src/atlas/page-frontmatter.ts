@@ -3,7 +3,7 @@ import { SLUG_PATTERN } from './slug.ts';
 
 /**
  * The frontmatter of a generated problem page, content/problems/<slug>.mdx. `recordVersion` is the number of
- * history entries of the record plus one; `bezoutBound` and `trueCount` repeat the record's first instance.
+ * history entries of the record (one per publication); `bezoutBound` and `trueCount` repeat the record's first instance.
  */
 export const pageFrontmatterSchema = z.object({
   slug: z.string().regex(SLUG_PATTERN),

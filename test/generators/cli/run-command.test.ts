@@ -68,7 +68,7 @@ describe('regenerate', () => {
     expect(readFileSync(recordPath(w.content, 'two-test-conics'), 'utf8')).toBe(published);
     const forced = fakeContext({ problemsDir: w.problems, engine: () => fakeEngine({ lose: 2, version: 'fake-2' }) });
     expect(await runCommand(['regenerate', 'two-test-conics', '--force', '--content', w.content], forced.ctx)).toBe(0);
-    expect(JSON.parse(readFileSync(recordPath(w.content, 'two-test-conics'), 'utf8')).history).toHaveLength(1);
+    expect(JSON.parse(readFileSync(recordPath(w.content, 'two-test-conics'), 'utf8')).history).toHaveLength(2);
   });
 });
 

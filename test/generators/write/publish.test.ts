@@ -18,12 +18,14 @@ describe('publishing a solve record', () => {
     solved = await fakeRecord();
   });
 
-  it('writes a schema-valid record and its page on first publication, with an empty history', async () => {
+  it('writes a schema-valid record and its page on first publication, with one dated history entry', async () => {
     const root = fresh();
     const outcome = publish(root, await fakeRecord(), { date: '2026-01-02' });
     expect(outcome.status).toBe('created');
     const parsed = parseRecord(bytes(root)[0]);
-    expect(parsed.ok && parsed.value.history).toEqual([]);
+    expect(parsed.ok && parsed.value.history).toEqual([
+      { date: '2026-01-02', engineVersion: 'fake-1', change: expect.stringMatching(/^first published; generic: found 4 of 4/) },
+    ]);
     expect(bytes(root)[1]).toMatch(/^---\nslug: "two-test-conics"\n[\s\S]*recordVersion: 1\n/);
   });
 
@@ -57,9 +59,9 @@ describe('publishing a solve record', () => {
     const parsed = parseRecord(bytes(root)[0]);
     expect(parsed.ok).toBe(true);
     const history = parsed.ok ? parsed.value.history : [];
-    expect(history).toHaveLength(1);
-    expect(history[0]).toMatchObject({ date: '2026-02-03', engineVersion: 'fake-2' });
-    expect(history[0]!.change).toMatch(/^engine fake-1 → fake-2; generic: found 4 → 3/);
+    expect(history).toHaveLength(2);
+    expect(history[1]).toMatchObject({ date: '2026-02-03', engineVersion: 'fake-2' });
+    expect(history[1]!.change).toMatch(/^engine fake-1 → fake-2; generic: found 4 → 3/);
     expect(bytes(root)[1]).toMatch(/recordVersion: 2\n/);
   });
 
@@ -78,7 +80,7 @@ describe('publishing a solve record', () => {
     const outcome = publish(root, await fakeRecord({ version: 'fake-3' }), { date: '2026-01-04' });
     expect(outcome.status).toBe('replaced');
     const parsed = parseRecord(bytes(root)[0]);
-    expect(parsed.ok && parsed.value.history.map((h) => h.date)).toEqual(['2026-01-03', '2026-01-04']);
+    expect(parsed.ok && parsed.value.history.map((h) => h.date)).toEqual(['2026-01-02', '2026-01-03', '2026-01-04']);
   });
 
   it('leaves the published record readable and unchanged when the write fails between temporary file and rename', async () => {
