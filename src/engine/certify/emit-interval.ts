@@ -30,7 +30,7 @@ export function intervalLine(isPoint: readonly boolean[]): (ins: Instruction) =>
       }
       case 'mul':
         return isPoint[ins.a]
-          ? `K(B,${o},B[${4 * ins.a}],B[${4 * ins.a + 2}],B,${4 * ins.b});`
+          ? `K(B,${o},B,${4 * ins.a},B,${4 * ins.b});`
           : `M(B,${o},B,${4 * ins.a},B,${4 * ins.b});`;
       case 'sqr':
         return `Q(B,${o},B,${4 * ins.a});`;

@@ -1,6 +1,6 @@
 import { widenDown, widenUp } from '../interval/outward.ts';
-import { mulHi, mulLo, scaleHi, scaleLo } from '../interval/bounds.ts';
-import { dotEnclosure, midRadius } from '../interval/dot-bound.ts';
+import { midRadius } from '../interval/dot-bound.ts';
+import { addProduct, matrixEntry, subtractScaled } from './krawczyk-kernels.ts';
 import type { CertifiableSystem } from './compiled-system.ts';
 
 /**
@@ -8,7 +8,8 @@ import type { CertifiableSystem } from './compiled-system.ts';
  * with centre m ∈ X: K(X) = m − Y·F(m) + (I − Y·J(X))·(X − m). If K(X) lies in the interior of X, the system
  * has exactly one zero in X (and it lies in K(X)). Every operation is outward rounded, so a pass is a proof; a
  * NaN or an overflow makes the test fail, never pass. The n³ part, Y·J(X), runs in midpoint–radius form with an
- * a-priori rounding bound (dot-bound.ts), which is sound and an order of magnitude cheaper than widening every term. Buffers are made once per size; a test allocates nothing.
+ * a-priori rounding bound (dot-bound.ts), sound and an order of magnitude cheaper than widening every term.
+ * Buffers are made once per system; a test allocates nothing (krawczyk-kernels.ts).
  */
 export interface KrawczykTester {
   /**
@@ -30,7 +31,7 @@ export function createKrawczykTester(system: CertifiableSystem): KrawczykTester 
   const enclosure = new Float64Array(4 * n);
   const centres = new Float64Array(2 * n * n); // J(X) as complex midpoints …
   const radii = new Float64Array(2 * n * n); // … and radii of the real and imaginary parts
-  const work = new Float64Array(4), product = new Float64Array(4);
+  const work = new Float64Array(4), product = new Float64Array(10), acc = new Float64Array(4), entry = new Float64Array(4);
   // per column j, the rows k with a structurally non-zero J_kj (CSR by column): Y·J(X) skips the zeros
   const columnStart = new Int32Array(n + 1);
   const rows: number[] = [];
@@ -59,48 +60,17 @@ export function createKrawczykTester(system: CertifiableSystem): KrawczykTester 
     }
     let inside = true;
     for (let i = 0; i < n; i++) {
-      // K_i starts at m_i − (Y·F(m))_i
-      let kl = centre[2 * i]!, kh = kl, ql = centre[2 * i + 1]!, qh = ql;
-      for (let k = 0; k < n; k++) {
-        const yr = inverse[2 * (i * n + k)]!, yi = inverse[2 * (i * n + k) + 1]!;
-        const o = 4 * k;
-        const c0 = fm[o]!, c1 = fm[o + 1]!, d0 = fm[o + 2]!, d1 = fm[o + 3]!;
-        kl = widenDown(kl - widenUp(scaleHi(yr, c0, c1) - scaleLo(yi, d0, d1)));
-        kh = widenUp(kh - widenDown(scaleLo(yr, c0, c1) - scaleHi(yi, d0, d1)));
-        ql = widenDown(ql - widenUp(scaleHi(yr, d0, d1) + scaleHi(yi, c0, c1)));
-        qh = widenUp(qh - widenDown(scaleLo(yr, d0, d1) + scaleLo(yi, c0, c1)));
-      }
+      // K_i = m_i − (Y·F(m))_i + Σ_j M_ij·(X_j − m_j), accumulated in acc
+      acc[0] = acc[1] = centre[2 * i]!;
+      acc[2] = acc[3] = centre[2 * i + 1]!;
+      for (let k = 0; k < n; k++) subtractScaled(acc, inverse, 2 * (i * n + k), fm, 4 * k);
       for (let j = 0; j < n; j++) {
-        // M_ij = δ_ij − Σ_k Y_ik · J_kj, the sum enclosed in midpoint–radius form with an a-priori rounding bound
-        let sr = 0, si = 0, tr = 0, ti = 0, rr = 0, ri = 0;
-        for (let q = columnStart[j]!, end = columnStart[j + 1]!; q < end; q++) {
-          const k = columnRows[q]!;
-          const y = 2 * (i * n + k), c = 2 * (k * n + j);
-          const yr = inverse[y]!, yi = inverse[y + 1]!, ayr = Math.abs(yr), ayi = Math.abs(yi);
-          const cr = centres[c]!, ci = centres[c + 1]!, dr = radii[c]!, di = radii[c + 1]!;
-          sr += yr * cr - yi * ci;
-          si += yr * ci + yi * cr;
-          tr += ayr * Math.abs(cr) + ayi * Math.abs(ci);
-          ti += ayr * Math.abs(ci) + ayi * Math.abs(cr);
-          rr += ayr * dr + ayi * di;
-          ri += ayr * di + ayi * dr;
-        }
-        const terms = 2 * (columnStart[j + 1]! - columnStart[j]!);
-        dotEnclosure(terms, sr, tr, rr, product, 0);
-        dotEnclosure(terms, si, ti, ri, product, 2);
-        const delta = i === j ? 1 : 0;
-        const rl = widenDown(delta - product[1]!), rh = widenUp(delta - product[0]!), il = -product[3]!, ih = -product[2]!;
-        // K_i += M_ij · (X_j − m_j)
-        const o = 4 * j;
-        const c0 = offset[o]!, c1 = offset[o + 1]!, d0 = offset[o + 2]!, d1 = offset[o + 3]!;
-        kl = widenDown(kl + widenDown(mulLo(rl, rh, c0, c1) - mulHi(il, ih, d0, d1)));
-        kh = widenUp(kh + widenUp(mulHi(rl, rh, c0, c1) - mulLo(il, ih, d0, d1)));
-        ql = widenDown(ql + widenDown(mulLo(rl, rh, d0, d1) + mulLo(il, ih, c0, c1)));
-        qh = widenUp(qh + widenUp(mulHi(rl, rh, d0, d1) + mulHi(il, ih, c0, c1)));
+        matrixEntry(entry, i, j, n, inverse, centres, radii, columnRows, columnStart[j]!, columnStart[j + 1]!, product);
+        addProduct(acc, entry, offset, 4 * j);
       }
       const o = 4 * i;
-      enclosure[o] = kl; enclosure[o + 1] = kh; enclosure[o + 2] = ql; enclosure[o + 3] = qh;
-      if (!(kl > box[o]! && kh < box[o + 1]! && ql > box[o + 2]! && qh < box[o + 3]!)) inside = false;
+      enclosure[o] = acc[0]!; enclosure[o + 1] = acc[1]!; enclosure[o + 2] = acc[2]!; enclosure[o + 3] = acc[3]!;
+      if (!(acc[0]! > box[o]! && acc[1]! < box[o + 1]! && acc[2]! > box[o + 2]! && acc[3]! < box[o + 3]!)) inside = false;
     }
     return inside;
   };

@@ -69,8 +69,9 @@ export function complexSqr(out: Float64Array, o: number, a: Float64Array, ia: nu
   out[o + 3] = ihi;
 }
 
-/** The product of an exact complex double cr + i·ci and a rectangle b. */
-export function complexScale(out: Float64Array, o: number, cr: number, ci: number, b: Float64Array, ib: number): void {
+/** The product of an exact complex double, stored as a degenerate rectangle at c[ic] (re = c[ic], im = c[ic + 2]), and a rectangle b. */
+export function complexScale(out: Float64Array, o: number, c: Float64Array, ic: number, b: Float64Array, ib: number): void {
+  const cr = c[ic]!, ci = c[ic + 2]!;
   const c0 = b[ib]!, c1 = b[ib + 1]!, d0 = b[ib + 2]!, d1 = b[ib + 3]!;
   const rc0 = cr * c0, rc1 = cr * c1, id0 = ci * d0, id1 = ci * d1, rd0 = cr * d0, rd1 = cr * d1, ic0 = ci * c0, ic1 = ci * c1;
   const check = rc0 + rc1 + id0 + id1 + rd0 + rd1 + ic0 + ic1;

@@ -59,7 +59,7 @@ describe('complex rectangle unary operations', () => {
       expect(holds(out, cMul(ex, ex))).toBe(true);
       complexNeg(out, 0, a, 0);
       expect(holds(out, cSub([{ n: 0n, d: 1n }, { n: 0n, d: 1n }], ex))).toBe(true);
-      complexScale(out, 0, c[0], c[1], a, 0);
+      complexScale(out, 0, Float64Array.of(c[0], c[0], c[1], c[1]), 0, a, 0);
       expect(holds(out, cMul(exactPoint(c), ex))).toBe(true);
     }
   });

@@ -27,7 +27,7 @@ describe('midpoint–radius dot product enclosure', () => {
         absSum += Math.abs(a[k]!) * Math.abs(mr[0]!);
         radiusSum += Math.abs(a[k]!) * mr[1]!;
       }
-      dotEnclosure(length, sum, absSum, radiusSum, out, 0);
+      dotEnclosure(length, Float64Array.of(sum, absSum, radiusSum), 0, out, 0);
       for (let s = 0; s < 3; s++) {
         let exact: Fraction = { n: 0n, d: 1n };
         for (let k = 0; k < length; k++) exact = fAdd(exact, fMul(exactOf(a[k]!) as Fraction, finite(pointIn(random, lo[k]!, hi[k]!))));
@@ -38,7 +38,7 @@ describe('midpoint–radius dot product enclosure', () => {
 
   it('keeps a thin dot product thin: [1, 1]·3 + [2, 2]·5 stays within a few ulps of 13', () => {
     const out = new Float64Array(2);
-    dotEnclosure(2, 13, 13, 0, out, 0);
+    dotEnclosure(2, Float64Array.of(13, 13, 0), 0, out, 0);
     expect(out[0]).toBeLessThan(13);
     expect(out[1]).toBeGreaterThan(13);
     expect(out[1]! - out[0]!).toBeLessThan(1e-12);
@@ -46,7 +46,7 @@ describe('midpoint–radius dot product enclosure', () => {
 
   it('gives no finite enclosure from an overflowed sum', () => {
     const out = new Float64Array(2);
-    dotEnclosure(2, Infinity, Infinity, 0, out, 0);
+    dotEnclosure(2, Float64Array.of(Infinity, Infinity, 0), 0, out, 0);
     expect(out[1]).toBe(Infinity);
   });
 });
