@@ -44,7 +44,8 @@ const VALUATION_SPREAD = 1.1;
  * successive estimates with the same c agree to endgameTolerance and the estimate's residual passes
  * ENDPOINT_RESIDUAL. The radii stop early where the condition estimate passes 1e12 or a step fails. Then the
  * last loop estimate, or else the last good sample after Newton at the end, is a singular end when its
- * residual is ≤ ENDPOINT_RESIDUAL (winding number: the last loop's, or 0 = undetermined); otherwise the path fails. Writes the estimate (or, diverging, the last sample) into x.
+ * residual is ≤ ENDPOINT_RESIDUAL (winding number: the last loop's, or 0 = undetermined); otherwise the path fails.
+ * Before a divergence verdict and before that fallback, Newton at the end is tried from the sample (see settle). Writes the estimate (or, diverging, the last sample) into x.
  */
 export function createCauchyEndgame(stepper: Stepper, infinityDistance?: (x: Float64Array) => number): (x: Float64Array, endRe: number, endIm: number, uRe: number, uIm: number, r0: number) => EndgameResult {
   const len = 2 * stepper.n;
@@ -85,7 +86,7 @@ export function createCauchyEndgame(stepper: Stepper, infinityDistance?: (x: Flo
         break;
       }
       r = rNext;
-      if (infinityDistance && diverging(infinityDistance(x))) return done(1, true);
+      if (infinityDistance && diverging(infinityDistance(x))) return settle(x) ? done(1, false) : done(1, true);
       stepper.residual(x, endRe + r * uRe, endIm + r * uIm); // condition estimate at this sample
       if (stepper.condition > HOPELESS_CONDITION) break;
       if (!inZone) {
@@ -103,9 +104,23 @@ export function createCauchyEndgame(stepper: Stepper, infinityDistance?: (x: Flo
       x.set(previous);
       return done(lastWinding, false);
     }
+    if (settle(x)) return done(1, false);
     stepper.newton(x, endRe, endIm, s.finalTolerance, 8);
     if (stepper.residual(x, endRe, endIm) <= ENDPOINT_RESIDUAL) return done(0, false);
     return fail(stepStatus === 'ok' ? 'no-convergence' : stepStatus);
+
+    /**
+     * Newton at the end from x (a copy): when it converges to a point with condition ≤ singularCondition within
+     * 1 % (relative) of x, that regular point is the path's end (an ill-conditioned end the approach and the loops
+     * could not reach, seen before the divergence test misreads its slow approach): x moves there, true.
+     */
+    function settle(x: Float64Array): boolean {
+      estimate.set(x);
+      if (!stepper.newton(estimate, endRe, endIm, s.finalTolerance, 8) || !(stepper.condition <= s.singularCondition)) return false;
+      if (distInf(estimate, x) > 1e-2 * (1 + normInf(x))) return false;
+      x.set(estimate);
+      return true;
+    }
 
     /** Records the next distance to infinity and applies the divergence test. */
     function diverging(next: number): boolean {
