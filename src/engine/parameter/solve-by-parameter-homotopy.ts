@@ -60,7 +60,8 @@ export interface ParameterSolveReport extends Omit<SolveReport, 'startSystem'> {
 /**
  * Solves the shown system at `target` (packed complex, the shown system's parameter order) by coefficient-parameter
  * homotopy (Morgan–Sommese, Appl. Math. Comput. 29, 1989) from the stored generic set, with the jump check of
- * trackRoute and, for paths that still fail, re-tracking in alternate charts (chart-retry.ts). Solutions: distinct regular ends (relative tolerance 1e-8) mapped to the shown unknowns, sorted by
+ * trackRoute and, for paths that still fail, re-tracking in alternate charts (chart-retry.ts). Solutions: distinct
+ * regular ends (relative tolerance 1e-8; singular ends likewise in `singular`) mapped to the shown unknowns, sorted by
  * their coordinates; residual and condition are the working system's at the end. Bounds are read off `shown`.
  */
 export async function solveByParameterHomotopy(problem: ParameterProblem, target: Float64Array, options: ParameterSolveOptions): Promise<ParameterSolveReport> {
@@ -77,14 +78,15 @@ export async function solveByParameterHomotopy(problem: ParameterProblem, target
   const rechartRecovered = problem.alternateCharts && route.ends.some((e) => e.outcome !== 'regular')
     ? await retryInOtherCharts(problem.working, problem.alternateCharts, legs, problem.start.solutions, route.ends, 2, options.trackerFor)
     : 0;
-  const found = collect(route.ends, problem.toShown, problem.isReal ?? isRealPoint);
+  const found = collect(route.ends, 'regular', problem.toShown, problem.isReal ?? isRealPoint);
+  const singular = collect(route.ends, 'singular', problem.toShown, problem.isReal ?? isRealPoint);
   return {
     bezoutBound: bezoutBound(problem.shown),
     multihomogeneousBound: multihomogeneousBound(problem.shown),
     startSystem: 'parameter-homotopy',
     ends: route.ends,
     solutions: found,
-    singular: [],
+    singular,
     stats: statistics(route.ends),
     seconds: (performance.now() - began) / 1000,
     jumpRetracks: route.jumpRetracks,
@@ -93,11 +95,11 @@ export async function solveByParameterHomotopy(problem: ParameterProblem, target
   };
 }
 
-function collect(ends: readonly PathEnd[], toShown: (x: Float64Array) => Float64Array, isReal: (x: Float64Array) => boolean): FoundSolution[] {
+function collect(ends: readonly PathEnd[], outcome: 'regular' | 'singular', toShown: (x: Float64Array) => Float64Array, isReal: (x: Float64Array) => boolean): FoundSolution[] {
   const out: FoundSolution[] = [];
   let index: ReturnType<typeof createPointIndex> | null = null;
   ends.forEach((e, i) => {
-    if (e.outcome !== 'regular') return;
+    if (e.outcome !== outcome) return;
     index ??= createPointIndex(e.point.length / 2);
     const j = index.find(e.point);
     if (j >= 0) { out[j]!.paths.push(i); out[j]!.multiplicity++; return; }
