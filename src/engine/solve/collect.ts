@@ -1,6 +1,6 @@
 import type { PolynomialSystem } from '../expr/node.ts';
 import type { PathEnd } from '../homotopy.ts';
-import { compileSystem } from '../compile/compile-system.ts';
+import { compiledTarget } from './compiled-target.ts';
 import { distInf, normInf } from '../complex/packed.ts';
 import { createAffineTools } from './affine.ts';
 import { isRealPoint } from './real.ts';
@@ -21,7 +21,7 @@ export const SINGULAR_CLUSTER_TOLERANCE = 1e-5;
  * the path indices (for one shard's ends). Concatenated shard ends give the same report as one run.
  */
 export function collectSolutions(system: PolynomialSystem, parameters: Float64Array, ends: readonly PathEnd[], bounds: SolveBounds, firstPath = 0): SolveReport {
-  const compiled = compileSystem(system);
+  const compiled = compiledTarget(system);
   const tools = createAffineTools(compiled, parameters);
   const clusters: { point: Float64Array; paths: number[]; regular: boolean; members: Float64Array[] }[] = [];
   ends.forEach((end, k) => {

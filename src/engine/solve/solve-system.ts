@@ -1,6 +1,6 @@
 import type { PolynomialSystem } from '../expr/node.ts';
 import type { PathEnd } from '../homotopy.ts';
-import { compileSystem } from '../compile/compile-system.ts';
+import { compiledTarget } from './compiled-target.ts';
 import { bezoutBound, multihomogeneousBound } from '../start/bounds.ts';
 import { planHomotopy } from '../start/plan.ts';
 import { COMPILED_HOMOTOPY_MODULE, createHomotopy } from '../homotopies/compiled-module.ts';
@@ -43,7 +43,7 @@ export async function solveSystem(system: PolynomialSystem, parameters: Float64A
   if (workers > 0) raw = await (await sharedPool(workers)).track(job, options.onProgress);
   // in-process: the same homotopy and tracker a worker builds, without importing the module by URL (bundlers)
   else raw = trackStarts(createTracker(createHomotopy(plan.args)), job.starts, 0, 1, (done) => options.onProgress?.(done, last - first));
-  const tools = createAffineTools(compileSystem(system), parameters);
+  const tools = createAffineTools(compiledTarget(system), parameters);
   const ends = raw.map((e) => toAffineEnd(e, plan.projectiveGroups, system.unknowns.length, tools));
   const report = collectSolutions(system, parameters, ends, bounds, first);
   report.seconds = (performance.now() - began) / 1000;
