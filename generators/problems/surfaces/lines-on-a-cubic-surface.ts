@@ -19,13 +19,12 @@ const view: PlaneWindow = { xMin: -4, xMax: 4, yMin: -4, yMax: 4 };
  */
 export const clebschFrame: readonly (readonly number[])[] = [[1, 0.3, -0.2, 0.5], [-0.4, 1, 0.25, -0.3], [0.2, -0.35, 1, 0.4], [0.1, 0.15, -0.3, 1]];
 
-function demoSurface(): number[] {
+/** The cubic Σ formᵢ³ of the frame's linear forms (plus −Σ forms when `clebsch`), as the 20 coefficients. */
+function sumOfCubes(clebsch: boolean): Record<string, ComplexInput> {
   const forms = clebschFrame.map(([a, b, c, k]) => linearForm([a!, b!, c!], k!));
-  const last = scale(sum(...forms), -1);
-  return coefficientsOf(sum(...[...forms, last].map((f) => product(f, f, f))), exponents);
+  const all = clebsch ? [...forms, scale(sum(...forms), -1)] : forms;
+  return Object.fromEntries(coefficientsOf(sum(...all.map((f) => product(f, f, f))), exponents).map((c, m) => [names[m]!, c]));
 }
-
-const demoParameters: Record<string, ComplexInput> = Object.fromEntries(demoSurface().map((c, m) => [names[m]!, c]));
 
 /** The section of the surface by the plane z = 0 (the terms without z). */
 const slice = (q: Readonly<Record<string, number>>): FigureItem[] => planeCurveItems(q, names, exponents, view, 'section by the plane z = 0');
@@ -79,7 +78,15 @@ export default defineProblem({
       label: 'A plaster model with 27 real lines',
       description: 'A workshop casts a plaster model of a cubic surface for a mathematics classroom and wants to stretch a thread along every straight line on it. The surface is a tilted copy of the diagonal surface $\\sum x_i^3 = 0$, $\\sum x_i = 0$; all 27 lines are real.',
       seed: 19,
-      parameters: demoParameters,
+      parameters: sumOfCubes(true),
+    },
+    {
+      id: 'fermat-model',
+      kind: 'demo',
+      label: 'A second model with only 3 real lines',
+      description: 'The same workshop casts the Fermat cubic surface $x_0^3 + x_1^3 + x_2^3 + x_3^3 = 0$, tilted by the same change of coordinates. Of its 27 lines only 3 are real (the lines $x_i + x_j = x_k + x_l = 0$), the smallest real count a smooth real cubic surface can have.',
+      seed: 31,
+      parameters: sumOfCubes(false),
     },
   ],
   drawing: {

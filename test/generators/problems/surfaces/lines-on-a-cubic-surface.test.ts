@@ -35,6 +35,12 @@ describe('lines on a cubic surface: the formulation', () => {
     expect(largestResidual(system.equations, real(chart), params)).toBeLessThan(1e-7);
   });
 
+  it.each([[0, 1, 2, 3], [0, 2, 1, 3], [0, 3, 1, 2]])('the Fermat model contains the real line x%i + x%i = x%i + x%i = 0', (i, j, k, l) => {
+    const fermat = paramsFrom(system.parameters, demoInstance(definition, 'fermat-model').parameters as Record<string, number>);
+    const plane = (p: number, q: number) => clebschFrame[p]!.map((v, t) => v + clebschFrame[q]![t]!);
+    expect(largestResidual(system.equations, real(lineChart(plane(i!, j!), plane(k!, l!))), fermat)).toBeLessThan(1e-7);
+  });
+
   it('a line off the surface does not satisfy the equations', () => {
     expect(largestResidual(system.equations, real([0.1, 0.2, 0.3, 0.4]), params)).toBeGreaterThan(1e-3);
   });
@@ -74,5 +80,11 @@ describe('solving lines on a cubic surface', () => {
     expect(solved.real).toBe(27);
     // Every real line crosses the drawing's view.
     expect(drawnRealSolutions(definition, demo, solved).map((items) => items.filter((i) => i.shape === 'polyline').length)).toEqual(new Array(27).fill(1));
+  });
+
+  it('the Fermat model: 27 lines, exactly 3 real (the least possible, Schläfli 1863)', async () => {
+    const { report, real } = await solveInstance(definition, demoInstance(definition, 'fermat-model'));
+    expect(report.solutions).toHaveLength(27);
+    expect(real).toBe(3);
   });
 });
