@@ -40,6 +40,12 @@ const demoParameters: Record<string, ComplexInput> = Object.fromEntries([
   ...chartNames.map((n, i) => [n, Number(demoChart[i]!.toFixed(12))] as const),
 ]);
 
+/** A second demo: one convex oval, x⁴ + 1.3y⁴ + 0.4x²y² + 0.3x³ − 0.2xy² + 0.1xy + 0.05x = 1, chart σ = 0.2. */
+const ovalParameters: Record<string, ComplexInput> = Object.fromEntries([
+  ...names.map((n) => [n, ({ c40: 1, c04: 1.3, c22: 0.4, c30: 0.3, c12: -0.2, c11: 0.1, c10: 0.05, c00: -1 } as Record<string, number>)[n] ?? 0] as const),
+  ['sigma', 0.2] as const,
+]);
+
 const curve = (q: Readonly<Record<string, number>>): FigureItem[] => planeCurveItems(q, names, exponents, view, 'the quartic', 220);
 
 /** The point A·(t, mt + k) of the plane, for a real chart A read from the parameters. */
@@ -110,6 +116,14 @@ export default defineProblem({
       description: 'A stained-glass designer outlines four leaf-shaped panes with one quartic curve, the product of two crossing ellipses nudged by a small constant, and wants every straight lead line that touches the outline twice. All $28$ bitangents are real.',
       seed: 29,
       parameters: demoParameters,
+    },
+    {
+      id: 'single-oval',
+      kind: 'demo',
+      label: 'A single convex oval',
+      description: 'The designer’s second pane is one convex oval, $x^4 + 1.3y^4 + 0.4x^2y^2 + 0.3x^3 - 0.2xy^2 + 0.1xy + 0.05x = 1$. Only $4$ of its $28$ bitangents are real, the least a real quartic can have, and each touches the curve at two complex conjugate points, so none touches the visible oval.',
+      seed: 37,
+      parameters: ovalParameters,
     },
   ],
   solver: { kind: 'multihomogeneous' },
