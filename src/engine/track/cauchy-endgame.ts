@@ -23,12 +23,13 @@ export interface EndgameResult {
  * the distance to infinity d is sampled at s_k = r0·ρ^k. A diverging path has d_k ≈ a·ρ^{k·w}, w > 0: the
  * valuation estimates w_k = log(d_k / d_{k−1}) / log ρ are steady and Aitken's Δ² extrapolation of d tends to 0.
  * A finite end has d_k ≈ d* + a·ρ^{k/c}: its w_k shrink by the factor ρ^{1/c} per sample (over three estimates,
- * by more than 16 % for winding numbers c ≤ 16) and Aitken recovers d* > 0. Diverging: d ≤ 0.1 and
+ * by more than 16 % for winding numbers c ≤ 16) and Aitken recovers d* > 0. Diverging: d ≤ 0.02 and
  * decreasing, the last three w_k in [1/64, 64] within 10 % of each other, and the extrapolated limit below
- * a quarter of d (a finite end could pass only with winding number above 16 and d* ≤ 0.025, i.e. coordinates
- * ≥ 40× the chart's scale: the documented blind spot).
+ * a quarter of d. A finite end passes only if approached slowly while still far (a very ill-conditioned end,
+ * or winding number above 16) with d* ≤ 0.005, coordinates ≥ 200× the chart's scale: the documented blind spot;
+ * and before any verdict Newton at the end is tried from the sample (settle).
  */
-const DIVERGING_DISTANCE = 0.1;
+const DIVERGING_DISTANCE = 0.02;
 const LIMIT_FRACTION = 0.25;
 const VALUATION_SPREAD = 1.1;
 
@@ -100,13 +101,19 @@ export function createCauchyEndgame(stepper: Stepper, infinityDistance?: (x: Flo
     // No settled estimate before the radii ran out, the condition passed 1e12, or a step failed close to the end:
     // the last loop estimate (else the last good sample, polished by Newton at the end) is accepted as a singular
     // end when its residual is at most ENDPOINT_RESIDUAL, with the last winding number (0: undetermined).
+    // (A nonsingular end has winding number 1 by the implicit function theorem, whatever the loops said.)
     if (havePrevious && stepper.residual(previous, endRe, endIm) <= ENDPOINT_RESIDUAL) {
       x.set(previous);
-      return done(lastWinding, false);
+      return done(stepper.condition <= s.singularCondition ? 1 : lastWinding, false);
     }
     if (settle(x)) return done(1, false);
     stepper.newton(x, endRe, endIm, s.finalTolerance, 8);
-    if (stepper.residual(x, endRe, endIm) <= ENDPOINT_RESIDUAL) return done(0, false);
+    if (stepper.residual(x, endRe, endIm) <= ENDPOINT_RESIDUAL) {
+      if (stepper.condition <= s.singularCondition) return done(1, false);
+      // singular and close to infinity, the distance still falling at the last samples: at infinity
+      const last = infinityDistance ? infinityDistance(x) : Infinity;
+      return done(0, last <= DIVERGING_DISTANCE && dd[3]! < dd[2]! && dd[2]! < dd[1]!);
+    }
     return fail(stepStatus === 'ok' ? 'no-convergence' : stepStatus);
 
     /**
