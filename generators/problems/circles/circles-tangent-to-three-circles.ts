@@ -58,7 +58,7 @@ export default defineProblem({
   },
   excessNote: [
     'None: the three tangency quadrics meet in exactly $8$ points of the projective space of circle equations, none of them at infinity, for general data.',
-    'Excess appears only in other coordinates: with centre and signed radius the same circle is found twice, and squared distance equations of degree 4 give $64$ paths.',
+    'Excess appears only in other coordinates: with centre $(x, y)$ and radius $R$, the two kinds of contact $|c - (a, b)| = R \\pm r$ combine into one quartic per given circle, so the naive count is $4^3 = 64$, and each circle is found twice (radius $\\pm R$).',
   ].join(' '),
   instances: [
     genericInstance('Random complex circles', 20260101, 'Centres and radii'),
