@@ -21,8 +21,8 @@ function problem(): Promise<ParameterProblem> {
 
 async function solveAt(target: Float64Array, seed: number): Promise<ParameterSolveReport> {
   const p = await problem();
-  const track = createPoolLegTracker(await sharedPool(WORKERS), p.working);
-  return solveByParameterHomotopy(p, target, { seed, track });
+  const pool = await sharedPool(WORKERS);
+  return solveByParameterHomotopy(p, target, { seed, track: createPoolLegTracker(pool, p.working), trackerFor: async (ref) => createPoolLegTracker(pool, ref) });
 }
 
 /** The runner's outcome (found = distinct nonsingular conics); retries and real conics go to stderr beside the table. */

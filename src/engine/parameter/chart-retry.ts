@@ -31,7 +31,7 @@ export async function retryInOtherCharts(
     const pending = ends.map((e, i) => (e.outcome === 'regular' ? -1 : i)).filter((i) => i >= 0);
     if (pending.length === 0) break;
     const constants = charts.constants(k);
-    const track = await trackerFor({ url: working.url, constants });
+    const track = await trackerFor({ ...working, constants });
     const route = await trackRoute(track, legs, pending.map((i) => charts.convert(starts[i]!, working.constants, constants)));
     const index = createPointIndex(starts[0]!.length / 2);
     ends.forEach((e) => { if (e.outcome === 'regular') index.add(e.point); });

@@ -11,6 +11,8 @@ import type { LegTracker } from './route.ts';
 export interface HomotopyModuleRef {
   readonly url: string;
   readonly constants: Readonly<Record<string, unknown>>;
+  /** Tracker settings this problem wants (over the defaults; a caller's own settings override these). */
+  readonly settings?: Partial<TrackerSettings>;
 }
 
 /** The args a module's createHomotopy receives for one leg. */
@@ -23,5 +25,5 @@ export async function createModuleLegTracker(ref: HomotopyModuleRef, settings: P
   const mod = (await import(ref.url)) as { createHomotopy?: (args: Record<string, unknown>) => Homotopy };
   const create = mod.createHomotopy;
   if (typeof create !== 'function') throw new Error(`homotopy module ${ref.url} does not export createHomotopy(args)`);
-  return createInProcessLegTracker((leg) => create(legArgs(ref, leg)), settings);
+  return createInProcessLegTracker((leg) => create(legArgs(ref, leg)), { ...ref.settings, ...settings });
 }

@@ -12,7 +12,7 @@ import type { LegTracker } from './route.ts';
  * pool un-refs a worker when any one of its jobs ends, which would let Node exit while another job still runs there.
  */
 export function createPoolLegTracker(pool: TrackingPool, ref: HomotopyModuleRef, settings: Partial<TrackerSettings> = {}): LegTracker {
-  const base: TrackerSettings = { ...DEFAULT_TRACKER_SETTINGS, ...settings };
+  const base: TrackerSettings = { ...DEFAULT_TRACKER_SETTINGS, ...ref.settings, ...settings };
   const safeSettings = stricterSettings(base, 1);
   const keys = new WeakMap<ParameterLeg, string>();
   let counter = 0;
