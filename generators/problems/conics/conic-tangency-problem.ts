@@ -15,8 +15,12 @@ import type { TangencyShape } from './tangency-layout.ts';
 /** Conics through p general points tangent to 5 − p general conics, p = 5…0 (Chasles 1864; Bashelor–Ksir–Traves 2008). */
 export const CONIC_LADDER: Readonly<Record<number, number>> = { 5: 1, 4: 6, 3: 36, 2: 184, 1: 816, 0: 3264 };
 
-/** A fixed complex affine chart of the P⁵ of conics (our own arbitrary numbers): the shown solution has Σ hₖ·coefₖ = 1. */
-const SHOWN_CHART: readonly (readonly [number, number])[] = [[0.41, -0.73], [0.58, 0.22], [-0.36, 0.64], [0.77, 0.15], [-0.29, -0.51], [0.66, 0.48]];
+/**
+ * A fixed real affine chart of the P⁵ of conics (our own arbitrary numbers): the shown solution has Σ hₖ·coefₖ = 1.
+ * Real, so that a real conic has real coordinates and its realness can be certified; the real conics on its
+ * hyperplane at infinity form a set of measure zero that no instance of ours meets.
+ */
+const SHOWN_CHART: readonly (readonly [number, number])[] = [[0.41, 0], [0.58, 0], [-0.36, 0], [0.77, 0], [-0.29, 0], [0.66, 0]];
 
 /** A demo configuration: real points and real conics (coefficients), in words. */
 export interface ConicDemo {
@@ -97,7 +101,7 @@ export function conicTangencyProblem(points: number, seeds: { generic: number; s
         ];
       },
       description: [
-        'Shown: the six coefficients of the conic in a fixed complex affine chart of $\\mathbb{P}^5$; passing through a point is linear, and tangency to a conic $A$ is the discriminant of the binary cubic $\\det(sA + tU)$, of degree 6 in $U$,',
+        'Shown: the six coefficients of the conic in a fixed real affine chart of $\\mathbb{P}^5$; passing through a point is linear, and tangency to a conic $A$ is the discriminant of the binary cubic $\\det(sA + tU)$, of degree 6 in $U$,',
         `so the Bézout bound is $6^{${k}} = ${bound}$. Solved: the tangency-point formulation (Breiding–Sturmfels–Timme 2020), with each point of contact as two extra unknowns in a random chart of $\\mathbb{P}^2$ — on both conics, gradients parallel — of degree at most 3, tracked from a stored generic solution set by parameter homotopy.`,
       ].join(' '),
       coordinates: { names: [...CONIC_LETTERS], map: normalizeByLargest },
