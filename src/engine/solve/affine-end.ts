@@ -8,18 +8,14 @@ export const AFFINE_RESIDUAL = 1e-8;
  * estimates of 1e9–1e11 in double precision, so only a clearly nonsingular Jacobian overrides a singular verdict.
  */
 const CLEARLY_NONSINGULAR = 1e6;
-/** A singular end near infinity whose residual exceeds this does not solve the target: it counts at infinity. */
-const NOT_A_SOLUTION = 1e-4;
-/** Relative distance to infinity below which an unresolved singular end is counted at infinity. */
-const NEAR_INFINITY = 0.02;
 
 /**
  * Turns a path end in multiprojective homotopy coordinates (groups: coordinate indices, homogenising one last)
  * into the target's coordinates: finite ends become x_j = X_j / h_g(j) with the affine residual and condition;
  * 'at-infinity' ends (and failed ends with some h_g = 0) carry the direction (X_0 … X_{n−1}) / max_j |X_j|
  * and keep the homotopy's residual and condition. A 'singular' finite end is re-judged on the target itself:
- * residual ≤ 1e-8 and condition ≤ 1e6 make it 'regular' (winding number 1); within relative distance 0.02 of
- * infinity, a residual above 1e-4 makes it 'at-infinity'.
+ * residual ≤ 1e-8 and condition ≤ 1e6 make it 'regular' (winding number 1). (A singular end close to infinity
+ * stays 'singular': a slowly diverging path and a far finite singular point cannot be told apart here.)
  */
 export function toAffineEnd(end: PathEnd, groups: readonly (readonly number[])[], n: number, tools: AffineTools): PathEnd {
   const X = end.point;
@@ -40,10 +36,6 @@ export function toAffineEnd(end: PathEnd, groups: readonly (readonly number[])[]
       // nonsingular after all (the projective chart was badly scaled there): winding number 1, implicit function theorem
       return { ...end, outcome: 'regular', windingNumber: 1, point: x, residual, condition };
     }
-    // a singular end near infinity that does not solve the affine system: at infinity
-    if (end.outcome === 'singular' && residual > NOT_A_SOLUTION && infinityDistance(X, groups) <= NEAR_INFINITY) {
-      return direction({ ...end, outcome: 'at-infinity' }, X, n);
-    }
     return { ...end, point: x, residual, condition };
   }
   return direction(end, X, n);
@@ -56,16 +48,4 @@ function direction(end: PathEnd, X: Float64Array, n: number): PathEnd {
   for (let j = 0; j < n; j++) m = Math.max(m, Math.hypot(X[2 * j]!, X[2 * j + 1]!));
   for (let i = 0; i < 2 * n; i++) x[i] = m > 0 ? X[i]! / m : X[i]!;
   return { ...end, point: x };
-}
-
-/** min over groups of |h_g| / max_{j ∈ g} |X_j| (homogenising coordinate last in each group). */
-function infinityDistance(X: Float64Array, groups: readonly (readonly number[])[]): number {
-  let d = Infinity;
-  for (const g of groups) {
-    let m = 0;
-    for (const j of g) m = Math.max(m, Math.hypot(X[2 * j]!, X[2 * j + 1]!));
-    const h = g[g.length - 1]!;
-    d = Math.min(d, Math.hypot(X[2 * h]!, X[2 * h + 1]!) / m);
-  }
-  return d;
 }
