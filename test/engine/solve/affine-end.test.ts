@@ -1,0 +1,33 @@
+import { describe, expect, it } from 'vitest';
+import type { PathEnd } from '../../../src/engine/homotopy.ts';
+import { mul, sub, unknown } from '../../../src/engine/expr/build.ts';
+import { compileSystem } from '../../../src/engine/compile/compile-system.ts';
+import { createAffineTools } from '../../../src/engine/solve/affine.ts';
+import { toAffineEnd } from '../../../src/engine/solve/affine-end.ts';
+
+// x − 2 = 0, x·y − 6 = 0 (hand arithmetic: the one solution (2, 3), Jacobian [[1, 0], [3, 2]], nonsingular).
+const x = unknown('x', 0), y = unknown('y', 1);
+const tools = createAffineTools(compileSystem({ unknowns: ['x', 'y'], parameters: [], equations: [sub(x, 2), sub(mul(x, y), 6)] }), new Float64Array(0));
+const groups = [[0, 1, 2]]; // homotopy coordinates (X₀, X₁, h)
+const end = (outcome: PathEnd['outcome'], X: number[]): PathEnd => ({ outcome, point: new Float64Array(X), residual: 0, condition: 1e12, windingNumber: 2, steps: 1, rejectedSteps: 0, retries: 0 });
+
+describe('toAffineEnd', () => {
+  it('dehomogenises a finite end: x = X / h', () => {
+    const e = toAffineEnd(end('regular', [1, 0, 1.5, 0, 0.5, 0]), groups, 2, tools);
+    expect(Array.from(e.point)).toEqual([2, 0, 3, 0]);
+    expect(e.residual).toBe(0);
+  });
+  it('re-judges a singular verdict at a clearly nonsingular solution as regular with winding number 1 (implicit function theorem)', () => {
+    const e = toAffineEnd(end('singular', [1, 0, 1.5, 0, 0.5, 0]), groups, 2, tools);
+    expect(e.outcome).toBe('regular');
+    expect(e.windingNumber).toBe(1);
+  });
+  it('keeps a singular verdict away from a solution', () => {
+    const e = toAffineEnd(end('singular', [1, 0, 1, 0, 0.5, 0]), groups, 2, tools);
+    expect(e.outcome).toBe('singular');
+  });
+  it('gives an end at infinity as its direction scaled to max |Xⱼ| = 1', () => {
+    const e = toAffineEnd(end('at-infinity', [2, 0, 0, -4, 0, 0]), groups, 2, tools);
+    expect(Array.from(e.point)).toEqual([0.5, 0, 0, -1]);
+  });
+});
