@@ -56,7 +56,7 @@ export function createArrowheadSolver(layout: ArrowheadLayout): LinearSolver {
   let q = 0;
   border.forEach((row) => { schurSource[q++] = -1 - row; });
   blocks.forEach((b, i) => { for (let k = b.unknowns.length; k < b.equations.length; k++) schurSource[q++] = R0[i]! + k; });
-  const xs = new Float64Array(2 * s), out2 = new Float64Array(2 * n);
+  const xs = new Float64Array(2 * s), out2 = new Float64Array(2 * s);
   const sharedIdx = Int32Array.from(shared);
 
   return {
@@ -114,13 +114,13 @@ export function createArrowheadSolver(layout: ArrowheadLayout): LinearSolver {
       for (let i = 0; i < s; i++) copy(out2, 2 * schurPerm[i]!, xs, 2 * i);
       forward(schur, 0, xs, 0, s, s, s);
       backward(schur, 0, xs, 0, s, s, 0, 0, null);
+      // Every read of b is done: write the solution straight into out (which may alias b).
       for (let bi = 0; bi < nb; bi++) {
         const r0 = R0[bi]!, p = Pn[bi]!;
         backward(work, W0[bi]!, rhs, 2 * r0, p, p + s, p, s, xs);
-        for (let j = 0; j < p; j++) copy(rhs, 2 * (r0 + j), out2, 2 * privateCols[P0[bi]! + j]!);
+        for (let j = 0; j < p; j++) copy(rhs, 2 * (r0 + j), out, 2 * privateCols[P0[bi]! + j]!);
       }
-      for (let j = 0; j < s; j++) copy(xs, 2 * j, out2, 2 * sharedIdx[j]!);
-      for (let i = 0; i < 2 * n; i++) out[i] = out2[i]!;
+      for (let j = 0; j < s; j++) copy(xs, 2 * j, out, 2 * sharedIdx[j]!);
     },
   };
 }

@@ -35,6 +35,17 @@ describe.each([['five-conic pattern', fiveConics], ['scrambled pattern', scrambl
     ax.forEach((v, i) => expect(v).toBeCloseTo(b[i]!, 9));
   });
 
+  it('solves in place when out aliases b', () => {
+    const n = layout.n, a = randomArrowhead(layout, 6), random = createRandom(7);
+    const solver = createArrowheadSolver(layout);
+    solver.factor(a);
+    const b = new Float64Array(2 * n).map(() => random.normal());
+    const separate = new Float64Array(2 * n), inPlace = b.slice();
+    solver.solve(b, separate);
+    solver.solve(inPlace, inPlace);
+    inPlace.forEach((v, i) => expect(v).toBe(separate[i]));
+  });
+
   it('reports a singular matrix as infinitely ill-conditioned', () => {
     const a = randomArrowhead(layout, 5);
     const b = layout.blocks[0]!;
