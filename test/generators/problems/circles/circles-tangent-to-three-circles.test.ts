@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import definition from '../../../../generators/problems/circles/circles-tangent-to-three-circles.ts';
 import { systemOf } from '../../../../src/atlas/system-of.ts';
 import { evaluate, real } from '../shared/evaluate.ts';
-import { drawnRealSolutions, demoInstance, randomInstance, seeds, solveInstance } from '../shared/solve.ts';
+import { drawnRealSolutions, demoInstance, randomInstance, seeds, solveInstance, worstResidual } from '../shared/solve.ts';
 
 const demo = definition.instances.find((i) => i.id === 'three-ponds')!;
 const p = demo.parameters as Record<string, number>;
@@ -77,6 +77,7 @@ describe('circles tangent to three circles (Apollonius)', () => {
 describe('solving circles tangent to three circles', () => {
   it.each(seeds(20))('random complex instance %i: 8 tangent circles, every path regular, none failed', async (seed) => {
     const { report } = await solveInstance(definition, randomInstance(seed));
+    expect(worstResidual(report)).toBeLessThan(1e-8);
     expect(report.bezoutBound).toBe(8);
     expect(report.solutions).toHaveLength(8);
     expect(report.stats).toMatchObject({ tracked: 8, regular: 8, singular: 0, atInfinity: 0, failed: 0 });

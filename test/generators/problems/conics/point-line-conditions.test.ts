@@ -3,7 +3,7 @@ import { pointLineProblem, characteristicNumbers, tangencyQuadric } from '../../
 import * as ops from '../../../../src/engine/expr/build.ts';
 import { systemOf } from '../../../../src/atlas/system-of.ts';
 import { evaluate, largestResidual, paramsFrom, real, type C } from '../shared/evaluate.ts';
-import { drawnRealSolutions, demoInstance, randomInstance, seeds, solveInstance, splitSeeds } from '../shared/solve.ts';
+import { drawnRealSolutions, demoInstance, randomInstance, seeds, solveInstance, splitSeeds, worstResidual } from '../shared/solve.ts';
 import conicsThrough5Points from '../../../../generators/problems/conics/conics-through-5-points.ts';
 import conicsThrough4Points from '../../../../generators/problems/conics/conics-through-4-points-tangent-to-1-line.ts';
 import conicsThrough3Points from '../../../../generators/problems/conics/conics-through-3-points-tangent-to-2-lines.ts';
@@ -71,6 +71,7 @@ describe.each([
 
   const check = async (seed: number) => {
     const { report } = await solveInstance(definition, randomInstance(seed));
+    expect(worstResidual(report)).toBeLessThan(1e-8);
     expect(report.solutions).toHaveLength(count);
     expect(report.stats).toMatchObject({ tracked: bound, regular: count, singular: bound - count, atInfinity: 0, failed: 0 });
     if (p === 2) expect(report.singular.map((s) => s.multiplicity)).toEqual([4]); // the one double line through both points

@@ -3,7 +3,7 @@ import conics from '../../../../generators/problems/intersections/points-common-
 import cubics from '../../../../generators/problems/intersections/points-common-to-two-cubics.ts';
 import { systemOf } from '../../../../src/atlas/system-of.ts';
 import { largestResidual, real, type C } from '../shared/evaluate.ts';
-import { drawnRealSolutions, demoInstance, randomInstance, seeds, solveInstance } from '../shared/solve.ts';
+import { drawnRealSolutions, demoInstance, randomInstance, seeds, solveInstance, worstResidual } from '../shared/solve.ts';
 
 describe.each([[conics, 2], [cubics, 3]] as const)('%s', (definition, d) => {
   const system = systemOf(definition);
@@ -37,6 +37,7 @@ describe.each([[conics, 2], [cubics, 3]] as const)('%s', (definition, d) => {
 describe.each([[conics, 4, 'two-running-tracks'], [cubics, 9, 'woven-threads']] as const)('solving %s', (definition, count, demo) => {
   it.each(seeds(20))(`random complex instance %i: ${count} common points, every path regular`, async (seed) => {
     const { report } = await solveInstance(definition, randomInstance(seed));
+    expect(worstResidual(report)).toBeLessThan(1e-8);
     expect(report.solutions).toHaveLength(count);
     expect(report.stats).toMatchObject({ tracked: count, regular: count, singular: 0, atInfinity: 0, failed: 0 });
   });

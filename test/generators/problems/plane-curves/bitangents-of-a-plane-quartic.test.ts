@@ -4,7 +4,7 @@ import { systemOf } from '../../../../src/atlas/system-of.ts';
 import { monomialExponents } from '../../../../generators/problems/shared/monomials.ts';
 import { coefficientsOf, linearForm, product, sum } from '../../../../generators/problems/shared/numeric-polynomial.ts';
 import { largestResidual, paramsFrom, real } from '../shared/evaluate.ts';
-import { drawnRealSolutions, demoInstance, randomInstance, seeds, solveInstance, splitSeeds } from '../shared/solve.ts';
+import { drawnRealSolutions, demoInstance, randomInstance, seeds, solveInstance, splitSeeds, worstResidual } from '../shared/solve.ts';
 
 const system = systemOf(definition);
 
@@ -43,6 +43,7 @@ describe('bitangents of a plane quartic: the formulation', () => {
 describe('solving bitangents of a plane quartic', () => {
   const check = async (seed: number) => {
     const { report } = await solveInstance(definition, randomInstance(seed));
+    expect(worstResidual(report)).toBeLessThan(1e-8);
     expect(report.solutions).toHaveLength(28);
     expect(report.stats).toMatchObject({ tracked: 288, regular: 28, singular: 0, atInfinity: 260, failed: 0 });
   };

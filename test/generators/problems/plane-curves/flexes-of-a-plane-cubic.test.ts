@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import definition from '../../../../generators/problems/plane-curves/flexes-of-a-plane-cubic.ts';
 import { systemOf } from '../../../../src/atlas/system-of.ts';
 import { evaluate, paramsFrom, real } from '../shared/evaluate.ts';
-import { drawnRealSolutions, demoInstance, randomInstance, seeds, solveInstance } from '../shared/solve.ts';
+import { drawnRealSolutions, demoInstance, randomInstance, seeds, solveInstance, worstResidual } from '../shared/solve.ts';
 
 const system = systemOf(definition);
 // The Fermat cubic x³ + y³ + 1 = 0: its flexes are the 9 points with one homogeneous coordinate 0, e.g. (−1, 0)
@@ -31,6 +31,7 @@ describe('flexes of a plane cubic: the formulation', () => {
 describe('solving flexes of a plane cubic', () => {
   it.each(seeds(20))('random complex cubic %i: 9 flexes, every path regular', async (seed) => {
     const { report } = await solveInstance(definition, randomInstance(seed));
+    expect(worstResidual(report)).toBeLessThan(1e-8);
     expect(report.solutions).toHaveLength(9);
     expect(report.stats).toMatchObject({ tracked: 9, regular: 9, singular: 0, atInfinity: 0, failed: 0 });
   });

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import definition from '../../../../generators/problems/schubert/lines-meeting-four-lines.ts';
 import { systemOf } from '../../../../src/atlas/system-of.ts';
 import { largestResidual, paramsFrom, real } from '../shared/evaluate.ts';
-import { drawnRealSolutions, demoInstance, randomInstance, seeds, solveInstance } from '../shared/solve.ts';
+import { drawnRealSolutions, demoInstance, randomInstance, seeds, solveInstance, worstResidual } from '../shared/solve.ts';
 
 const system = systemOf(definition);
 
@@ -30,12 +30,14 @@ describe('lines meeting four lines: the formulation', () => {
 describe('solving lines meeting four lines', () => {
   it.each(seeds(20))('random complex instance %i, total degree: 2 transversals, the other 2 paths at infinity', async (seed) => {
     const { report } = await solveInstance(definition, randomInstance(seed), 'total-degree');
+    expect(worstResidual(report)).toBeLessThan(1e-8);
     expect(report.solutions).toHaveLength(2);
     expect(report.stats).toMatchObject({ tracked: 4, regular: 2, singular: 0, atInfinity: 2, failed: 0 });
   });
 
   it.each(seeds(20))('random complex instance %i, two-homogeneous: 2 paths, both transversals', async (seed) => {
     const { report } = await solveInstance(definition, randomInstance(seed), 'multihomogeneous');
+    expect(worstResidual(report)).toBeLessThan(1e-8);
     expect(report.multihomogeneousBound).toBe(2);
     expect(report.solutions).toHaveLength(2);
     expect(report.stats).toMatchObject({ tracked: 2, regular: 2, failed: 0 });

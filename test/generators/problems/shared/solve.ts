@@ -62,3 +62,8 @@ export function drawnRealSolutions(definition: ProblemDefinition, instance: Inst
       return items;
     });
 }
+
+/** The largest residual ‖F(x)‖∞ / (1 + ‖x‖∞) over a report's found solutions (0 when none): every found solution must solve. */
+export function worstResidual(report: SolveReport): number {
+  return Math.max(0, ...report.solutions.map((s) => s.residual));
+}

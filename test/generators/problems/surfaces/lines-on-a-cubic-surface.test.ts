@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import definition, { clebschFrame } from '../../../../generators/problems/surfaces/lines-on-a-cubic-surface.ts';
 import { systemOf } from '../../../../src/atlas/system-of.ts';
 import { largestResidual, paramsFrom, real } from '../shared/evaluate.ts';
-import { drawnRealSolutions, demoInstance, randomInstance, seeds, solveInstance, splitSeeds } from '../shared/solve.ts';
+import { drawnRealSolutions, demoInstance, randomInstance, seeds, solveInstance, splitSeeds, worstResidual } from '../shared/solve.ts';
 
 const system = systemOf(definition);
 const demo = definition.instances.find((i) => i.kind === 'demo')!;
@@ -57,6 +57,7 @@ describe('lines on a cubic surface: the formulation', () => {
 describe('solving lines on a cubic surface', () => {
   const check = async (seed: number) => {
     const { report } = await solveInstance(definition, randomInstance(seed));
+    expect(worstResidual(report)).toBeLessThan(1e-8);
     expect(report.solutions).toHaveLength(27);
     expect(report.stats).toMatchObject({ tracked: 81, regular: 27, singular: 0, atInfinity: 54, failed: 0 });
   };
@@ -68,6 +69,7 @@ describe('solving lines on a cubic surface', () => {
 
   it.each(seeds(5))('random complex surface %i, two-homogeneous start: 27 lines of 45 paths, the other 18 at infinity', async (seed) => {
     const { report } = await solveInstance(definition, randomInstance(seed), 'multihomogeneous');
+    expect(worstResidual(report)).toBeLessThan(1e-8);
     expect(report.multihomogeneousBound).toBe(45);
     expect(report.solutions).toHaveLength(27);
     expect(report.stats).toMatchObject({ tracked: 45, regular: 27, singular: 0, atInfinity: 18, failed: 0 });
