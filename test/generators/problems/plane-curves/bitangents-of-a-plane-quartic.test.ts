@@ -70,3 +70,15 @@ describe('solving bitangents of a plane quartic', () => {
     expect(drawnRealSolutions(definition, demo, solved).map((items) => items.filter((i) => i.layer === 'tangency').length)).toEqual([0, 0, 0, 0]);
   });
 });
+
+// Minimal failing cases found beyond the 20 seeds above, reported to the lead; skipped until the engine handles
+// them. 1002: a path near infinity is reported as a 29th "solution" (residual 3.5e3, condition 3e18);
+// 1014: two paths fail by step underflow and 27 bitangents are found.
+describe.skip('bitangents: engine issues beyond the tested seeds', () => {
+  it.each([1002, 1014])('random complex quartic %i: 28 bitangents, every found solution solves, none failed', async (seed) => {
+    const { report } = await solveInstance(definition, randomInstance(seed));
+    expect(worstResidual(report)).toBeLessThan(1e-8);
+    expect(report.solutions).toHaveLength(28);
+    expect(report.stats.failed).toBe(0);
+  });
+});
