@@ -107,17 +107,16 @@ function collect(ends: readonly PathEnd[], outcome: 'regular' | 'singular', toSh
     const point = toShown(e.point);
     out.push({ point, residual: e.residual, condition: e.condition, multiplicity: 1, real: isReal(point), paths: [i] });
   });
-  return out.sort((a, b) => compareLexicographic(a.point, b.point));
+  const keys = new Map(out.map((s) => [s, Array.from(s.point, (v) => Number(v.toPrecision(9)))]));
+  return out.sort((a, b) => compareKeys(keys.get(a)!, keys.get(b)!));
 }
 
 /** Orders points by their coordinates (re, im, …), each rounded to 9 significant digits so that noise cannot flip the order of distinct points. */
-export function compareLexicographic(a: Float64Array, b: Float64Array): number {
-  for (let i = 0; i < Math.min(a.length, b.length); i++) {
-    const x = Number(a[i]!.toPrecision(9)), y = Number(b[i]!.toPrecision(9));
-    if (x !== y) return x - y;
-  }
+function compareKeys(a: readonly number[], b: readonly number[]): number {
+  for (let i = 0; i < Math.min(a.length, b.length); i++) if (a[i] !== b[i]) return a[i]! - b[i]!;
   return a.length - b.length;
 }
+
 
 /** Path counts that add up, with the median and largest step counts and the total retries. */
 export function statistics(ends: readonly PathEnd[]): PathStatistics {
