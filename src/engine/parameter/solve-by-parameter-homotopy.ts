@@ -8,7 +8,7 @@ import type { TrackerSettings } from '../track/settings.ts';
 import { createPointIndex } from './point-index.ts';
 import { createModuleLegTracker, type HomotopyModuleRef } from './module-tracker.ts';
 import { routeThrough, randomGamma, type LegTracker } from './route.ts';
-import { duplicateCount, trackRoute } from './track-route.ts';
+import { coincident, duplicateCount, trackRoute } from './track-route.ts';
 import { retryInOtherCharts, type AlternateCharts } from './chart-retry.ts';
 
 /** A problem solved from a stored generic solution set. */
@@ -75,6 +75,11 @@ export async function solveByParameterHomotopy(problem: ParameterProblem, target
     : [{ from: problem.start.parameters, to: target, gamma: randomGamma(random) }];
   const track = options.track ?? (await createModuleLegTracker(problem.working, options.settings));
   const route = await trackRoute(track, legs, problem.start.solutions);
+  if (problem.alternateCharts) {
+    // Ends that still coincide after the safe re-track: at least one of them jumped and neither can be trusted, so
+    // both count as failed and go to the chart retry below, which accepts only ends distinct from all others.
+    for (const i of coincident(route.ends, 1e-8)) route.ends[i] = { ...route.ends[i]!, outcome: 'failed', failure: 'no-convergence' };
+  }
   const rechartRecovered = problem.alternateCharts && route.ends.some((e) => e.outcome !== 'regular')
     ? await retryInOtherCharts(problem.working, problem.alternateCharts, legs, problem.start.solutions, route.ends, 2, options.trackerFor)
     : 0;

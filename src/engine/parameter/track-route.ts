@@ -49,7 +49,7 @@ async function alongLegs(track: LegTracker, legs: readonly ParameterLeg[], start
 }
 
 /** Indices of regular ends that coincide with another regular end (all members of each coincidence). */
-function coincident(ends: readonly PathEnd[], tolerance: number): number[] {
+export function coincident(ends: readonly PathEnd[], tolerance: number): number[] {
   const n = ends.find((e) => e.outcome === 'regular')?.point.length ?? 0;
   const index = createPointIndex(n / 2, tolerance);
   const owner: number[] = [];
