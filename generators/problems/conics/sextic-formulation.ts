@@ -1,14 +1,9 @@
 import type { ExprNode } from '../../../src/engine/expr/node.ts';
 import type * as ExprOps from '../../../src/engine/expr/build.ts';
 import { multiply, plus, type ExprPolynomial } from '../shared/univariate.ts';
-import { CONIC_LETTERS } from './conic-names.ts';
-import { conicAt, conicMatrix } from './conic-expr.ts';
-import { checkShape, type TangencyShape } from './tangency-layout.ts';
+import { conicMatrix } from './conic-expr.ts';
 
 type Ops = typeof ExprOps;
-
-/** Unknowns of the compact formulation: the conic a·x² + b·xy + c·y² + d·x + e·y + 1 (chart f = 1). */
-export const SEXTIC_UNKNOWNS = ['a', 'b', 'c', 'd', 'e'] as const;
 
 /**
  * The tangency condition of conics U and A: the discriminant of the binary cubic det(s·A + t·U), written with s = 1
@@ -30,17 +25,4 @@ export function tangencyDiscriminant(ops: Ops, u: readonly ExprNode[], a: readon
     ops.mul(-27, ops.pow(k3, 2), ops.pow(k0, 2)),
     ops.mul(18, k3, k2, k1, k0),
   );
-}
-
-/**
- * Equations of the compact formulation of "conics through p points tangent to k conics": one linear equation per
- * point (the conic passes through it) and one sextic per given conic (the tangency discriminant). Bézout 6^k.
- */
-export function sexticEquations(shape: TangencyShape, unknowns: Readonly<Record<string, ExprNode>>, parameters: Readonly<Record<string, ExprNode>>, ops: Ops): ExprNode[] {
-  checkShape(shape);
-  const u = [...SEXTIC_UNKNOWNS.map((n) => unknowns[n]!), ops.constant(1)];
-  const equations: ExprNode[] = [];
-  for (let j = 1; j <= shape.points; j++) equations.push(conicAt(ops, u, [parameters[`x${j}`]!, parameters[`y${j}`]!, ops.constant(1)]));
-  for (let i = 1; i <= shape.conics; i++) equations.push(tangencyDiscriminant(ops, u, CONIC_LETTERS.map((l) => parameters[`${l}${i}`]!)));
-  return equations;
 }
