@@ -1,7 +1,8 @@
 import { Worker } from 'node:worker_threads';
 import type { CertifiedBatch, CertifyBatch } from './certify-batch.ts';
+import { keepAlive, type KeepAlive } from '../pool/keep-alive.ts';
 
-/** Long-lived certification workers (Node backend): run(batch) on an idle worker; unref'd while idle. */
+/** Long-lived certification workers (Node backend): run(batch) on an idle worker; each keeps Node alive only while it has a batch. */
 export interface CertifyWorkers {
   readonly size: number;
   /** Runs batches on the workers, each worker taking the next batch when free; results in batch order. */
@@ -11,11 +12,8 @@ export interface CertifyWorkers {
 
 /** Starts `size` worker threads running certify-worker.ts. */
 export function createCertifyWorkers(size: number): CertifyWorkers {
-  const workers = Array.from({ length: size }, () => {
-    const w = new Worker(new URL('./certify-worker.ts', import.meta.url));
-    w.unref();
-    return w;
-  });
+  const workers = Array.from({ length: size }, () => new Worker(new URL('./certify-worker.ts', import.meta.url)));
+  const alive = new Map<Worker, KeepAlive>(workers.map((w) => [w, keepAlive(w)]));
   let nextId = 0;
   const run = (worker: Worker, batch: CertifyBatch): Promise<CertifiedBatch> => new Promise((resolve, reject) => {
     const id = nextId++;
@@ -26,8 +24,8 @@ export function createCertifyWorkers(size: number): CertifyWorkers {
       else resolve(m.result!);
     };
     const onError = (e: Error): void => { cleanup(); reject(e); };
-    const cleanup = (): void => { worker.off('message', onMessage); worker.off('error', onError); worker.unref(); };
-    worker.ref();
+    const cleanup = (): void => { worker.off('message', onMessage); worker.off('error', onError); alive.get(worker)!.release(); };
+    alive.get(worker)!.hold();
     worker.on('message', onMessage);
     worker.on('error', onError);
     worker.postMessage({ id, batch });

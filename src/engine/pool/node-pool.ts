@@ -2,20 +2,19 @@ import { Worker } from 'node:worker_threads';
 import { availableParallelism } from 'node:os';
 import type { PathEnd } from '../homotopy.ts';
 import type { PathJob, TrackingPool } from './job.ts';
+import { keepAlive, type KeepAlive } from './keep-alive.ts';
 
 /**
  * The Node backend of the tracking pool: `size` long-lived worker_threads (default availableParallelism()).
  * Jobs are cut into batches of about total / (4·size) paths (at least 1, at most 256) handed to idle workers
- * in order; ends are reassembled in start order, so results do not depend on the pool size. Workers are
- * unref'd while idle, so an idle pool never keeps Node alive; terminate() ends them.
+ * in order; ends are reassembled in start order, so results do not depend on the pool size. Overlapping track()
+ * calls share the workers; each worker keeps Node alive while any of its jobs runs and is unref'd only when idle, so
+ * an idle pool never keeps Node alive and a busy one never lets it exit; terminate() ends them.
  */
 export function createNodePool(size = availableParallelism()): TrackingPool {
   if (!Number.isInteger(size) || size < 1) throw new RangeError(`pool size must be a positive integer, got ${size}`);
-  const workers = Array.from({ length: size }, () => {
-    const w = new Worker(new URL('./worker.ts', import.meta.url));
-    w.unref();
-    return w;
-  });
+  const workers = Array.from({ length: size }, () => new Worker(new URL('./worker.ts', import.meta.url)));
+  const alive = new Map<Worker, KeepAlive>(workers.map((w) => [w, keepAlive(w)]));
   let nextId = 0;
   let terminated = false;
   const run = (worker: Worker, job: PathJob): Promise<PathEnd[]> => new Promise((resolve, reject) => {
@@ -27,8 +26,8 @@ export function createNodePool(size = availableParallelism()): TrackingPool {
       else resolve(m.ends!);
     };
     const onError = (e: Error): void => { cleanup(); reject(e); };
-    const cleanup = (): void => { worker.off('message', onMessage); worker.off('error', onError); worker.unref(); };
-    worker.ref();
+    const cleanup = (): void => { worker.off('message', onMessage); worker.off('error', onError); alive.get(worker)!.release(); };
+    alive.get(worker)!.hold();
     worker.on('message', onMessage);
     worker.on('error', onError);
     worker.postMessage({ id, job }, [job.starts.buffer as ArrayBuffer]);
