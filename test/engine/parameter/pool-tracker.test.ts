@@ -22,9 +22,12 @@ describe('the pool leg tracker', () => {
     expect(there.map((e) => e.outcome)).toEqual(['regular', 'regular', 'regular']);
     there.forEach((e, i) => e.point.forEach((v, j) => expect(v).toBeCloseTo(here[i]!.point[j]!, 12)));
   });
-  it('serves overlapping calls one after another, so none is lost', async () => {
+  it('serves overlapping calls on the shared workers, each with its own ends, so none is lost', async () => {
     const track = createPoolLegTracker(pool, ref);
     const results = await Promise.all([track(leg, starts, false), track(leg, starts.slice(0, 1), true), track(leg, starts, false)]);
     expect(results.map((r) => r.length)).toEqual([3, 1, 3]);
+    expect(results[1]![0]!.outcome).toBe('regular');
+    results[2]!.forEach((e, i) => e.point.forEach((v, j) => expect(v).toBe(results[0]![i]!.point[j])));
+    results[1]![0]!.point.forEach((v, j) => expect(v).toBeCloseTo(results[0]![0]!.point[j]!, 10));
   });
 });
