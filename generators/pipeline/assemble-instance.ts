@@ -17,6 +17,8 @@ export interface InstanceRun {
   readonly parameters: Float64Array;
   readonly report: EngineReport;
   readonly where: string;
+  /** Worker threads the certifier may use (the solve's --workers); omitted: one thread. Same verdict either way. */
+  readonly workers?: number;
 }
 
 /**
@@ -29,7 +31,7 @@ export async function assembleInstance(run: InstanceRun, engine: EngineServices)
   const { definition, instance, report, where } = run;
   const realParameters = run.parameters.every((v, k) => k % 2 === 0 || v === 0);
   const points = report.solutions.map((s) => s.point);
-  const verdict = await engine.certify(run.system, run.parameters, points, { realParameters });
+  const verdict = await engine.certify(run.system, run.parameters, points, run.workers === undefined ? { realParameters } : { realParameters, workers: run.workers });
   const names = definition.formulation.parameters;
   const parameters = Object.fromEntries(names.map((n, j) => [n, [run.parameters[2 * j]!, run.parameters[2 * j + 1]!] as [number, number]]));
   const solutions: Solution[] = report.solutions.map((s, i) => {

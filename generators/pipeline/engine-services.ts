@@ -80,7 +80,10 @@ export interface CertifyReport {
 export interface EngineServices {
   readonly version: string;
   readonly strategies: Readonly<Record<string, SolveStrategy>>;
-  readonly certify: (system: PolynomialSystem, parameters: Float64Array, points: Float64Array[], options: { realParameters: boolean }) => Promise<CertifyReport> | CertifyReport;
+  /** Certifies the points; `workers` (≥ 2) may spread the work over threads, with the same verdict as one thread. */
+  readonly certify: (system: PolynomialSystem, parameters: Float64Array, points: Float64Array[], options: { realParameters: boolean; workers?: number }) => Promise<CertifyReport> | CertifyReport;
   /** Post-processing of path ends (from concatenated shards, in path order) into a report, as a single run does. */
   readonly collect: (system: PolynomialSystem, parameters: Float64Array, ends: readonly PathEnd[], bounds: SolveBounds) => Promise<EngineReport> | EngineReport;
+  /** Ends any worker threads the engine started (the CLI calls it once a command is done); absent when there are none. */
+  readonly close?: () => Promise<void>;
 }

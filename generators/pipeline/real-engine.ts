@@ -3,14 +3,17 @@ import { AtlasError } from './atlas-error.ts';
 
 /**
  * The production engine: strategies keyed by SolverChoice kind, wired to src/engine's solveSystem (start systems
- * 'total-degree' and 'multihomogeneous'), certifySolutions and collectSolutions. Modules load on first use, so
- * commands that solve nothing (refresh with nothing stale, check) stay fast.
- * To add a strategy (parameter homotopy, monodromy), add one entry to `strategies` below.
+ * 'total-degree' and 'multihomogeneous'), solveByParameterHomotopy, certification and collectSolutions. With
+ * `workers`, paths (chart re-tracks too) run on the shared tracking pool and certification on the certification
+ * workers, with the same record as one thread; close() ends both. Modules load on first use, so commands that solve
+ * nothing (refresh with nothing stale, check) stay fast.
+ * To add a strategy (monodromy, say), add one entry to `strategies` below.
  */
 export async function loadEngine(): Promise<EngineServices> {
-  const [{ solveSystem, collectSolutions }, { certifySolutions }, { ENGINE_VERSION }, { solveByParameterHomotopy }, { createPoolLegTracker }, { sharedPool }] = await Promise.all([
+  const [{ solveSystem, collectSolutions }, { certifySolutions }, { certifySolutionsParallel, closeCertifyWorkers }, { ENGINE_VERSION }, { solveByParameterHomotopy }, { createPoolLegTracker }, { sharedPool, closeSharedPool }] = await Promise.all([
     import('../../src/engine/solve/solve-system.ts'),
     import('../../src/engine/certify/certify-solutions.ts'),
+    import('../../src/engine/certify/certify-parallel.ts'),
     import('../../src/engine/version.ts'),
     import('../../src/engine/parameter/solve-by-parameter-homotopy.ts'),
     import('../../src/engine/parameter/pool-tracker.ts'),
@@ -32,15 +35,22 @@ export async function loadEngine(): Promise<EngineServices> {
         const choice = definition.solver;
         if (choice?.kind !== 'parameter-homotopy') throw new AtlasError('input', `solver.kind: expected "parameter-homotopy"`);
         const problem = await choice.prepare(system);
-        const track = o.workers ? createPoolLegTracker(await sharedPool(o.workers), problem.working) : undefined;
-        return solveByParameterHomotopy(problem, parameters, { seed: o.seed, track });
+        if (!o.workers) return solveByParameterHomotopy(problem, parameters, { seed: o.seed });
+        const pool = await sharedPool(o.workers);
+        return solveByParameterHomotopy(problem, parameters, {
+          seed: o.seed,
+          track: createPoolLegTracker(pool, problem.working),
+          trackerFor: async (ref) => createPoolLegTracker(pool, ref),
+        });
       },
     },
   };
   return {
     version: ENGINE_VERSION,
     strategies,
-    certify: (system, parameters, points, options) => certifySolutions(system, parameters, points, options),
+    certify: (system, parameters, points, { workers, ...options }) =>
+      workers ? certifySolutionsParallel(system, parameters, points, { ...options, workers }) : certifySolutions(system, parameters, points, options),
     collect: (system, parameters, ends, bounds) => collectSolutions(system, parameters, ends, { ...bounds }),
+    close: async () => { await Promise.all([closeSharedPool(), closeCertifyWorkers()]); },
   };
 }

@@ -56,7 +56,7 @@ export async function solveProblem(loaded: LoadedDefinition, engine: EngineServi
     const report: EngineReport = await runEngine(where, () =>
       strategy.solve(loaded.system, parameters, { seed: instance.seed, workers: options.workers, onProgress }, loaded.definition),
     );
-    const run = { definition: loaded.definition, system: loaded.system, instance, seed: instance.seed, method: strategy.label, parameters, report, where };
+    const run = { definition: loaded.definition, system: loaded.system, instance, seed: instance.seed, method: strategy.label, parameters, report, where, workers: options.workers };
     const done = await runEngine(where, () => assembleInstance(run, engine));
     results.push(done.result);
     seconds.push(done.seconds);

@@ -15,17 +15,18 @@ function snapshot(dir: string): [string, string][] {
 }
 
 describe('regenerating with the real engine', () => {
-  it('gives byte-identical content twice, and a sharded solve merged gives the same record as a single run', async () => {
+  it('gives byte-identical content twice, with or without workers, and a sharded solve merged gives the same record as a single run', async () => {
     const dir = mkdtempSync(join(tmpdir(), 'atlas-regen-'));
     const file = join(dir, 'two-conics.ts');
     copyFileSync(TWO_CONICS, file);
-    const single = join(dir, 'single'), sharded = join(dir, 'sharded');
-    const [first, part1, part2] = await Promise.all([
+    const single = join(dir, 'single'), sharded = join(dir, 'sharded'), pooled = join(dir, 'pooled');
+    const [first, part1, part2, withWorkers] = await Promise.all([
       runCli(['regenerate', file, '--content', single]),
       runCli(['solve', file, '--shard', '1/2', '--out', join(dir, 'part-1.json')]),
       runCli(['solve', file, '--shard', '2/2', '--out', join(dir, 'part-2.json')]),
+      runCli(['regenerate', file, '--content', pooled, '--workers', '2']),
     ]);
-    for (const run of [first, part1, part2]) expect(run.code, run.stderr).toBe(0);
+    for (const run of [first, part1, part2, withWorkers]) expect(run.code, run.stderr).toBe(0);
     const once = snapshot(single);
     expect(once.map(([f]) => f)).toEqual(['/problems/two-test-conics.mdx', '/records/two-test-conics.json']);
     const [second, merged] = await Promise.all([
@@ -37,6 +38,7 @@ describe('regenerating with the real engine', () => {
     expect(snapshot(single)).toEqual(once);
     expect(merged.code, merged.stderr).toBe(0);
     expect(snapshot(sharded)).toEqual(once);
+    expect(snapshot(pooled)).toEqual(once);
   });
 
   it('reports a corrupt record with its file and field and exit code 3 from check', async () => {

@@ -1,5 +1,10 @@
-import { describe, expect, it } from 'vitest';
+import { afterAll, describe, expect, it } from 'vitest';
 import { loadEngine } from '../../../generators/pipeline/real-engine.ts';
+import type { ProblemDefinition } from '../../../src/atlas/definition.ts';
+import * as ops from '../../../src/engine/expr/build.ts';
+import { compileSystem } from '../../../src/engine/compile/compile-system.ts';
+import { COMPILED_LEG_MODULE } from '../../../src/engine/parameter/compiled-leg-module.ts';
+import type { ParameterProblem } from '../../../src/engine/parameter/solve-by-parameter-homotopy.ts';
 import { problems } from '../../../generators/problems/index.ts';
 import { ENGINE_VERSION } from '../../../src/engine/version.ts';
 
@@ -13,5 +18,44 @@ describe('the production engine wiring', () => {
 
   it.each([['total-degree', true], ['multihomogeneous', true], ['parameter-homotopy', false]])('%s can be sharded: %s', async (kind, shardable) => {
     expect((await loadEngine()).strategies[kind]!.shardable).toBe(shardable);
+  });
+});
+
+// x⁶⁴ = p from p = 1 (the 64th roots of unity) to p = −1 + i/2: 64 distinct roots (the roots of a complex number,
+// common practice, no source). 64 points are enough for the certifier to use its workers.
+const DEGREE = 64;
+const x = ops.unknown('x', 0);
+const shown = { unknowns: ['x'], parameters: ['p'], equations: [ops.sub(ops.pow(x, DEGREE), ops.param('p', 0))] };
+const compiled = compileSystem(shown);
+const roots = Array.from({ length: DEGREE }, (_, k) => Float64Array.of(Math.cos((2 * Math.PI * k) / DEGREE), Math.sin((2 * Math.PI * k) / DEGREE)));
+const problem: ParameterProblem = {
+  shown,
+  working: { url: COMPILED_LEG_MODULE, constants: { source: compiled.source, shape: { neq: 1, n: 1, np: 1 } } },
+  start: { parameters: Float64Array.of(1, 0), solutions: roots },
+  toShown: (p) => p.slice(),
+};
+const definition = { solver: { kind: 'parameter-homotopy', expected: DEGREE, prepare: async () => problem } } as unknown as ProblemDefinition;
+const target = Float64Array.of(-1, 0.5);
+const plain = (value: unknown) => JSON.stringify(value, (k, v) => (k === 'seconds' ? undefined : v instanceof Float64Array ? Array.from(v) : v));
+
+describe('the production engine with and without workers', () => {
+  const engine = loadEngine();
+  afterAll(async () => (await engine).close?.());
+
+  it('solves a parameter homotopy to the same report on the worker pool as on this thread (64 roots)', async () => {
+    const strategy = (await engine).strategies['parameter-homotopy']!;
+    const here = await strategy.solve(shown, target, { seed: 7 }, definition);
+    const pooled = await strategy.solve(shown, target, { seed: 7, workers: 2 }, definition);
+    expect(here.solutions).toHaveLength(DEGREE);
+    expect(plain(pooled)).toBe(plain(here));
+  });
+
+  it('certifies to the same verdict with two workers as with one thread (64 roots, all certified distinct)', async () => {
+    const e = await engine;
+    const points = (await e.strategies['parameter-homotopy']!.solve(shown, target, { seed: 7 }, definition)).solutions.map((s) => s.point);
+    const one = await e.certify(shown, target, points, { realParameters: false });
+    const two = await e.certify(shown, target, points, { realParameters: false, workers: 2 });
+    expect(one.certifiedDistinct).toBe(DEGREE);
+    expect(JSON.parse(plain(two))).toEqual(JSON.parse(plain(one))); // the same fields and numbers, in any key order
   });
 });
