@@ -6,8 +6,9 @@ import { keepAlive, type KeepAlive } from './keep-alive.ts';
 
 /**
  * The Node backend of the tracking pool: `size` long-lived worker_threads (default availableParallelism()).
- * Jobs are cut into batches of about total / (4·size) paths (at least 1, at most 256) handed to idle workers
- * in order; ends are reassembled in start order, so results do not depend on the pool size. Overlapping track()
+ * Jobs are cut into shrinking batches (guided scheduling: a quarter of the remaining paths per worker, at most 256,
+ * at least 1) handed to idle workers in order, so that the workers finish together; ends are reassembled in start
+ * order, so results do not depend on the pool size. Overlapping track()
  * calls share the workers; each worker keeps Node alive while any of its jobs runs and is unref'd only when idle, so
  * an idle pool never keeps Node alive and a busy one never lets it exit; terminate() ends them.
  */
@@ -40,21 +41,21 @@ export function createNodePool(size = availableParallelism()): TrackingPool {
       const perPoint = 2 * job.n;
       if (!(perPoint > 0) || total % perPoint !== 0) throw new RangeError(`pool job: starts length ${total} is not a multiple of 2n = ${perPoint}`);
       const paths = total / perPoint;
-      const batch = Math.max(1, Math.min(256, Math.ceil(paths / (4 * size))));
       const results: PathEnd[][] = [];
       let next = 0, done = 0;
       const loop = async (worker: Worker): Promise<void> => {
         while (next < paths) {
+          const batch = Math.max(1, Math.min(256, Math.ceil((paths - next) / (4 * size))));
           const k = next, end = Math.min(paths, k + batch);
           next = end;
           const starts = job.starts.slice(k * perPoint, end * perPoint);
-          results[k / batch] = await run(worker, { ...job, starts });
+          results[k] = await run(worker, { ...job, starts });
           done += end - k;
           onProgress?.(done, paths);
         }
       };
       await Promise.all(workers.map(loop));
-      return results.flat();
+      return results.flat(); // sparse, indexed by first path: flat() keeps start order
     },
     async terminate() {
       terminated = true;
