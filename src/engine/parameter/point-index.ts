@@ -27,14 +27,18 @@ export function createPointIndex(n: number, tolerance = 1e-8, cell = 1e-3): Poin
     for (let i = 0; i < 2 * n; i++) q += weights[i]! * x[i]!;
     return Math.floor(q / cell);
   };
-  const norm = (x: Float64Array): number => {
+  // Squared moduli instead of Math.hypot (several times slower): no overflow below |coordinate| ≈ 1e154.
+  const norm2 = (x: Float64Array): number => {
     let m = 0;
-    for (let i = 0; i < 2 * n; i += 2) m = Math.max(m, Math.hypot(x[i]!, x[i + 1]!));
+    for (let i = 0; i < 2 * n; i += 2) { const a = x[i]! * x[i]! + x[i + 1]! * x[i + 1]!; if (a > m) m = a; }
     return m;
   };
   const same = (x: Float64Array, y: Float64Array): boolean => {
-    const scale = tolerance * (1 + Math.max(norm(x), norm(y)));
-    for (let i = 0; i < 2 * n; i += 2) if (Math.hypot(x[i]! - y[i]!, x[i + 1]! - y[i + 1]!) > scale) return false;
+    const scale = tolerance * (1 + Math.sqrt(Math.max(norm2(x), norm2(y)))), scale2 = scale * scale;
+    for (let i = 0; i < 2 * n; i += 2) {
+      const dr = x[i]! - y[i]!, di = x[i + 1]! - y[i + 1]!;
+      if (dr * dr + di * di > scale2) return false;
+    }
     return true;
   };
   return {
