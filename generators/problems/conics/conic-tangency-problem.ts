@@ -72,7 +72,7 @@ export function conicTangencyProblem(points: number, seeds: { generic: number; s
     const set = await loadStartSet(shape, seeds.start, count);
     return {
       shown,
-      working: { url: new URL('./tangency-homotopy.ts', import.meta.url).href, constants: { points, conics: k, chart: set.chart }, settings: { retries: 1 } }, // one stricter retry; a path that still fails is re-tracked in another chart
+      working: { url: new URL('./tangency-homotopy.ts', import.meta.url).href, constants: { points, conics: k, chart: set.chart }, settings: { retries: 1, estimateCorrectorError: true } }, // one stricter retry; a path that still fails is re-tracked in another chart
       start: { parameters: set.parameters, solutions: set.solutions },
       toShown: toShownChart,
       isReal: (shown) => isRealPoint(normalizeByLargest(shown)),

@@ -16,6 +16,12 @@ export interface TrackerSettings {
   readonly predictorTolerance: number;
   /** Newton along the path stops when a correction is at most this. */
   readonly correctorTolerance: number;
+  /**
+   * Opt-in (default false): the corrector also stops after its second correction δ when that one contracted
+   * strongly (θ = δ / first correction ≤ 0.01) and the error it leaves, estimated as θ/(1 − θ)·δ (Deuflhard, Newton
+   * Methods for Nonlinear Problems, 2004, §2.1), is at most correctorTolerance; saves the third Newton iteration of most steps.
+   */
+  readonly estimateCorrectorError?: boolean;
   /** Newton iterations per step; more, and the step is refused. */
   readonly maxCorrectorIterations: number;
   /** Each Newton correction must be at most this fraction of the previous one (else the step is refused: no path jumping). */

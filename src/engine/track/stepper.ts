@@ -140,8 +140,9 @@ export function createStepper(homotopy: Homotopy, settings: TrackerSettings): St
         return -first;
       }
       for (let i = 0; i < len; i++) xp[i] = xp[i]! - dx[i]!;
+      const theta = delta / previous;
       previous = delta;
-      if (delta <= s.correctorTolerance) {
+      if (delta <= s.correctorTolerance || (s.estimateCorrectorError === true && it === 1 && theta <= 0.01 && (theta / (1 - theta)) * delta <= s.correctorTolerance)) {
         solver.solve(ht, k1);
         return scaleTangent(k1, dRe, dIm) ? first : -Infinity;
       }
