@@ -112,13 +112,20 @@ function collect(ends: readonly PathEnd[], outcome: 'regular' | 'singular', toSh
     const point = toShown(e.point);
     out.push({ point, residual: e.residual, condition: e.condition, multiplicity: 1, real: isReal(point), paths: [i] });
   });
-  const keys = new Map(out.map((s) => [s, Array.from(s.point, (v) => Number(v.toPrecision(9)))]));
-  return out.sort((a, b) => compareKeys(keys.get(a)!, keys.get(b)!));
+  // Rounded coordinates are computed on demand: most comparisons are settled by the first one.
+  const keys = new Map(out.map((s) => [s, new Array<number | undefined>(s.point.length)]));
+  return out.sort((a, b) => compareKeys(a.point, keys.get(a)!, b.point, keys.get(b)!));
 }
 
-/** Orders points by their coordinates (re, im, …), each rounded to 9 significant digits so that noise cannot flip the order of distinct points. */
-function compareKeys(a: readonly number[], b: readonly number[]): number {
-  for (let i = 0; i < Math.min(a.length, b.length); i++) if (a[i] !== b[i]) return a[i]! - b[i]!;
+/**
+ * Orders points by their coordinates (re, im, …), each rounded to 9 significant digits so that noise cannot flip the
+ * order of distinct points; ka, kb cache the rounded coordinates of a, b (filled as needed).
+ */
+function compareKeys(a: Float64Array, ka: (number | undefined)[], b: Float64Array, kb: (number | undefined)[]): number {
+  for (let i = 0; i < Math.min(a.length, b.length); i++) {
+    const x = (ka[i] ??= Number(a[i]!.toPrecision(9))), y = (kb[i] ??= Number(b[i]!.toPrecision(9)));
+    if (x !== y) return x - y;
+  }
   return a.length - b.length;
 }
 
