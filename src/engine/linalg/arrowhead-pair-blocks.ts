@@ -10,7 +10,8 @@ const L1 = 0, L2 = 2, L3 = 4, U00 = 6, U01 = 8, U11 = 10, S0 = 12;
  * The arrowhead solver specialised to blocks of 3 equations in 2 private unknowns (the tangency points of the conic
  * problems): the same partial-pivoting elimination, operation for operation, as the generic one (results agree to
  * the last bit), written out without index tables or generic loops over the private columns. Null for any other
- * layout. Allocates only at creation; factor() returns the same ‖A‖∞ / (smallest pivot) estimate as the generic one.
+ * layout. Allocates only at creation; factor() returns the same ‖A‖∞ / (smallest pivot) estimate as the generic one;
+ * factorOnly() skips that estimate (false when a pivot is zero or not finite).
  */
 export function createPairBlockSolver(layout: ArrowheadLayout): LinearSolver | null {
   const { n, shared, blocks, border } = layout;
@@ -29,75 +30,79 @@ export function createPairBlockSolver(layout: ArrowheadLayout): LinearSolver | n
     return sum;
   }
 
+  /** Factors a; returns ‖A‖∞ / (smallest pivot) when withNorm, else 1 / (smallest pivot); Infinity when singular. */
+  function factorize(a: Float64Array, withNorm: boolean): number {
+    let minPivot = Infinity, norm = withNorm ? 0 : 1;
+    for (let bi = 0; bi < nb; bi++) {
+      const c0 = 2 * cols[2 * bi]!, c1 = 2 * cols[2 * bi + 1]!, f = stride * bi;
+      let oA = 2 * n * rows[3 * bi]!, oB = 2 * n * rows[3 * bi + 1]!, oC = 2 * n * rows[3 * bi + 2]!;
+      let rA = 0, rB = 1, rC = 2;
+      if (withNorm) norm = Math.max(norm, rowSum(a, oA, c0, c1), rowSum(a, oB, c0, c1), rowSum(a, oC, c0, c1));
+      let a0r = a[oA + c0]!, a0i = a[oA + c0 + 1]!, a1r = a[oA + c1]!, a1i = a[oA + c1 + 1]!;
+      let b0r = a[oB + c0]!, b0i = a[oB + c0 + 1]!, b1r = a[oB + c1]!, b1i = a[oB + c1 + 1]!;
+      let c0r = a[oC + c0]!, c0i = a[oC + c0 + 1]!, c1r = a[oC + c1]!, c1i = a[oC + c1 + 1]!;
+      // Pivot in column 0 (first largest modulus wins, as in the generic elimination).
+      const mA = a0r * a0r + a0i * a0i, mB = b0r * b0r + b0i * b0i, mC = c0r * c0r + c0i * c0i;
+      let t: number;
+      if (mC > mA && mC > mB) { // swap A and C
+        t = oA; oA = oC; oC = t; t = rA; rA = rC; rC = t;
+        t = a0r; a0r = c0r; c0r = t; t = a0i; a0i = c0i; c0i = t; t = a1r; a1r = c1r; c1r = t; t = a1i; a1i = c1i; c1i = t;
+      } else if (mB > mA) { // swap A and B
+        t = oA; oA = oB; oB = t; t = rA; rA = rB; rB = t;
+        t = a0r; a0r = b0r; b0r = t; t = a0i; a0i = b0i; b0i = t; t = a1r; a1r = b1r; b1r = t; t = a1i; a1i = b1i; b1i = t;
+      }
+      const d0 = a0r * a0r + a0i * a0i;
+      if (d0 === 0) return Infinity;
+      minPivot = Math.min(minPivot, Math.sqrt(d0));
+      const i0r = a0r / d0, i0i = -a0i / d0;
+      let lBr = b0r * i0r - b0i * i0i, lBi = b0r * i0i + b0i * i0r;
+      let lCr = c0r * i0r - c0i * i0i, lCi = c0r * i0i + c0i * i0r;
+      b1r = b1r - (lBr * a1r - lBi * a1i); b1i = b1i - (lBr * a1i + lBi * a1r);
+      c1r = c1r - (lCr * a1r - lCi * a1i); c1i = c1i - (lCr * a1i + lCi * a1r);
+      // Pivot in column 1 among the two lower rows.
+      if (c1r * c1r + c1i * c1i > b1r * b1r + b1i * b1i) {
+        t = oB; oB = oC; oC = t; t = rB; rB = rC; rC = t;
+        t = lBr; lBr = lCr; lCr = t; t = lBi; lBi = lCi; lCi = t; t = b1r; b1r = c1r; c1r = t; t = b1i; b1i = c1i; c1i = t;
+      }
+      const d1 = b1r * b1r + b1i * b1i;
+      if (d1 === 0) return Infinity;
+      minPivot = Math.min(minPivot, Math.sqrt(d1));
+      const i1r = b1r / d1, i1i = -b1i / d1;
+      const l3r = c1r * i1r - c1i * i1i, l3i = c1r * i1i + c1i * i1r;
+      order[3 * bi] = rows[3 * bi + rA]!; order[3 * bi + 1] = rows[3 * bi + rB]!; order[3 * bi + 2] = rows[3 * bi + rC]!;
+      F[f + L1] = lBr; F[f + L1 + 1] = lBi; F[f + L2] = lCr; F[f + L2 + 1] = lCi; F[f + L3] = l3r; F[f + L3 + 1] = l3i;
+      F[f + U00] = a0r; F[f + U00 + 1] = a0i; F[f + U01] = a1r; F[f + U01 + 1] = a1i; F[f + U11] = b1r; F[f + U11 + 1] = b1i;
+      // Shared columns: S0 = row A, S1 = row B − lB·S0, Schur row = (row C − lC·S0) − l3·S1.
+      const q = 2 * s * (nbr + bi);
+      for (let j = 0, g = f + S0, h = f + S0 + 2 * s; j < s; j++, g += 2, h += 2) {
+        const cj = sc[j]!;
+        const s0r = a[oA + cj]!, s0i = a[oA + cj + 1]!;
+        const s1r = a[oB + cj]! - (lBr * s0r - lBi * s0i), s1i = a[oB + cj + 1]! - (lBr * s0i + lBi * s0r);
+        const s2r = a[oC + cj]! - (lCr * s0r - lCi * s0i), s2i = a[oC + cj + 1]! - (lCr * s0i + lCi * s0r);
+        F[g] = s0r; F[g + 1] = s0i; F[h] = s1r; F[h + 1] = s1i;
+        schur[q + 2 * j] = s2r - (l3r * s1r - l3i * s1i);
+        schur[q + 2 * j + 1] = s2i - (l3r * s1i + l3i * s1r);
+      }
+    }
+    for (let i = 0; i < nbr; i++) {
+      const o = 2 * n * borderRows[i]!;
+      let sum = 0;
+      for (let j = 0; j < s; j++) {
+        const re = a[o + sc[j]!]!, im = a[o + sc[j]! + 1]!;
+        schur[2 * (i * s + j)] = re; schur[2 * (i * s + j) + 1] = im;
+        sum += Math.abs(re) + Math.abs(im);
+      }
+      if (withNorm && sum > norm) norm = sum;
+    }
+    for (let i = 0; i < s; i++) schurPerm[i] = i;
+    const piv = eliminate(schur, 0, schurPerm, 0, s, s, s);
+    if (piv < minPivot) minPivot = piv;
+    return minPivot === 0 || !Number.isFinite(minPivot) ? Infinity : norm / minPivot;
+  }
+
   return {
-    factor(a) {
-      let minPivot = Infinity, norm = 0;
-      for (let bi = 0; bi < nb; bi++) {
-        const c0 = 2 * cols[2 * bi]!, c1 = 2 * cols[2 * bi + 1]!, f = stride * bi;
-        let oA = 2 * n * rows[3 * bi]!, oB = 2 * n * rows[3 * bi + 1]!, oC = 2 * n * rows[3 * bi + 2]!;
-        let rA = 0, rB = 1, rC = 2;
-        norm = Math.max(norm, rowSum(a, oA, c0, c1), rowSum(a, oB, c0, c1), rowSum(a, oC, c0, c1));
-        let a0r = a[oA + c0]!, a0i = a[oA + c0 + 1]!, a1r = a[oA + c1]!, a1i = a[oA + c1 + 1]!;
-        let b0r = a[oB + c0]!, b0i = a[oB + c0 + 1]!, b1r = a[oB + c1]!, b1i = a[oB + c1 + 1]!;
-        let c0r = a[oC + c0]!, c0i = a[oC + c0 + 1]!, c1r = a[oC + c1]!, c1i = a[oC + c1 + 1]!;
-        // Pivot in column 0 (first largest modulus wins, as in the generic elimination).
-        const mA = a0r * a0r + a0i * a0i, mB = b0r * b0r + b0i * b0i, mC = c0r * c0r + c0i * c0i;
-        let t: number;
-        if (mC > mA && mC > mB) { // swap A and C
-          t = oA; oA = oC; oC = t; t = rA; rA = rC; rC = t;
-          t = a0r; a0r = c0r; c0r = t; t = a0i; a0i = c0i; c0i = t; t = a1r; a1r = c1r; c1r = t; t = a1i; a1i = c1i; c1i = t;
-        } else if (mB > mA) { // swap A and B
-          t = oA; oA = oB; oB = t; t = rA; rA = rB; rB = t;
-          t = a0r; a0r = b0r; b0r = t; t = a0i; a0i = b0i; b0i = t; t = a1r; a1r = b1r; b1r = t; t = a1i; a1i = b1i; b1i = t;
-        }
-        const d0 = a0r * a0r + a0i * a0i;
-        if (d0 === 0) return Infinity;
-        minPivot = Math.min(minPivot, Math.sqrt(d0));
-        const i0r = a0r / d0, i0i = -a0i / d0;
-        let lBr = b0r * i0r - b0i * i0i, lBi = b0r * i0i + b0i * i0r;
-        let lCr = c0r * i0r - c0i * i0i, lCi = c0r * i0i + c0i * i0r;
-        b1r = b1r - (lBr * a1r - lBi * a1i); b1i = b1i - (lBr * a1i + lBi * a1r);
-        c1r = c1r - (lCr * a1r - lCi * a1i); c1i = c1i - (lCr * a1i + lCi * a1r);
-        // Pivot in column 1 among the two lower rows.
-        if (c1r * c1r + c1i * c1i > b1r * b1r + b1i * b1i) {
-          t = oB; oB = oC; oC = t; t = rB; rB = rC; rC = t;
-          t = lBr; lBr = lCr; lCr = t; t = lBi; lBi = lCi; lCi = t; t = b1r; b1r = c1r; c1r = t; t = b1i; b1i = c1i; c1i = t;
-        }
-        const d1 = b1r * b1r + b1i * b1i;
-        if (d1 === 0) return Infinity;
-        minPivot = Math.min(minPivot, Math.sqrt(d1));
-        const i1r = b1r / d1, i1i = -b1i / d1;
-        const l3r = c1r * i1r - c1i * i1i, l3i = c1r * i1i + c1i * i1r;
-        order[3 * bi] = rows[3 * bi + rA]!; order[3 * bi + 1] = rows[3 * bi + rB]!; order[3 * bi + 2] = rows[3 * bi + rC]!;
-        F[f + L1] = lBr; F[f + L1 + 1] = lBi; F[f + L2] = lCr; F[f + L2 + 1] = lCi; F[f + L3] = l3r; F[f + L3 + 1] = l3i;
-        F[f + U00] = a0r; F[f + U00 + 1] = a0i; F[f + U01] = a1r; F[f + U01 + 1] = a1i; F[f + U11] = b1r; F[f + U11 + 1] = b1i;
-        // Shared columns: S0 = row A, S1 = row B − lB·S0, Schur row = (row C − lC·S0) − l3·S1.
-        const q = 2 * s * (nbr + bi);
-        for (let j = 0, g = f + S0, h = f + S0 + 2 * s; j < s; j++, g += 2, h += 2) {
-          const cj = sc[j]!;
-          const s0r = a[oA + cj]!, s0i = a[oA + cj + 1]!;
-          const s1r = a[oB + cj]! - (lBr * s0r - lBi * s0i), s1i = a[oB + cj + 1]! - (lBr * s0i + lBi * s0r);
-          const s2r = a[oC + cj]! - (lCr * s0r - lCi * s0i), s2i = a[oC + cj + 1]! - (lCr * s0i + lCi * s0r);
-          F[g] = s0r; F[g + 1] = s0i; F[h] = s1r; F[h + 1] = s1i;
-          schur[q + 2 * j] = s2r - (l3r * s1r - l3i * s1i);
-          schur[q + 2 * j + 1] = s2i - (l3r * s1i + l3i * s1r);
-        }
-      }
-      for (let i = 0; i < nbr; i++) {
-        const o = 2 * n * borderRows[i]!;
-        let sum = 0;
-        for (let j = 0; j < s; j++) {
-          const re = a[o + sc[j]!]!, im = a[o + sc[j]! + 1]!;
-          schur[2 * (i * s + j)] = re; schur[2 * (i * s + j) + 1] = im;
-          sum += Math.abs(re) + Math.abs(im);
-        }
-        if (sum > norm) norm = sum;
-      }
-      for (let i = 0; i < s; i++) schurPerm[i] = i;
-      const piv = eliminate(schur, 0, schurPerm, 0, s, s, s);
-      if (piv < minPivot) minPivot = piv;
-      return minPivot === 0 || !Number.isFinite(minPivot) ? Infinity : norm / minPivot;
-    },
+    factor: (a) => factorize(a, true),
+    factorOnly: (a) => Number.isFinite(factorize(a, false)),
     solve(b, out) {
       for (let i = 0; i < nbr; i++) { rhs[2 * i] = b[2 * borderRows[i]!]!; rhs[2 * i + 1] = b[2 * borderRows[i]! + 1]!; }
       for (let bi = 0; bi < nb; bi++) {

@@ -72,6 +72,21 @@ describe.each([['five-conic pattern', fiveConics], ['scrambled 3×2 pattern', sc
     general.solve(b, y);
     expect(Array.from(x)).toEqual(Array.from(y));
   });
+
+  it('factors without the condition estimate to the same solution, and reports a singular block', () => {
+    const n = layout.n, a = randomArrowhead(layout, 21), random = createRandom(22);
+    const solver = createArrowheadSolver(layout);
+    const b = new Float64Array(2 * n).map(() => random.normal());
+    const x = new Float64Array(2 * n), y = new Float64Array(2 * n);
+    solver.factor(a);
+    solver.solve(b, x);
+    expect(solver.factorOnly!(a)).toBe(true);
+    solver.solve(b, y);
+    expect(Array.from(y)).toEqual(Array.from(x));
+    const blk = layout.blocks[1]!;
+    for (const r of blk.equations) a.fill(0, 2 * (r * n + blk.unknowns[1]!), 2 * (r * n + blk.unknowns[1]!) + 2);
+    expect(solver.factorOnly!(a)).toBe(false);
+  });
 });
 
 describe('arrowhead layout checks', () => {
