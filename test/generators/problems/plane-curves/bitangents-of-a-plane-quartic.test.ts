@@ -71,14 +71,19 @@ describe('solving bitangents of a plane quartic', () => {
   });
 });
 
-// Minimal failing cases found beyond the 20 seeds above, reported to the lead; skipped until the engine handles
-// them. 1002: a path near infinity is reported as a 29th "solution" (residual 3.5e3, condition 3e18);
-// 1014: two paths fail by step underflow and 27 bitangents are found.
-describe.skip('bitangents: engine issues beyond the tested seeds', () => {
-  it.each([1002, 1014])('random complex quartic %i: 28 bitangents, every found solution solves, none failed', async (seed) => {
+// Cases found beyond the 20 seeds above. 1002 once reported a path stopped short of infinity as a 29th
+// "solution" (residual 3.5e3, condition 3e18); regular ends must now solve the target (toAffineEnd).
+// 1014 still fails through an engine issue reported to the lead: two paths to infinity fail by step underflow
+// after their retries, and only 27 bitangents are found.
+describe('bitangents: cases beyond the tested seeds', () => {
+  const check = async (seed: number) => {
     const { report } = await solveInstance(definition, randomInstance(seed));
     expect(worstResidual(report)).toBeLessThan(1e-8);
     expect(report.solutions).toHaveLength(28);
-    expect(report.stats.failed).toBe(0);
-  });
+    expect(report.stats).toMatchObject({ tracked: 288, regular: 28, singular: 0, atInfinity: 260, failed: 0 });
+  };
+  const title = 'random complex quartic %i: 28 bitangents, every found solution solves, the other 260 paths at infinity';
+  const { checked, skipped } = splitSeeds([1002, 1014], [1014]);
+  it.each(checked)(title, check);
+  it.skip.each(skipped)(`${title} (engine issue)`, check);
 });
