@@ -8,6 +8,8 @@ import { DEFAULT_TRACKER_SETTINGS, stricterSettings, type TrackerSettings } from
 export const INFINITY_TOLERANCE = 1e-8;
 /** Attempted steps allowed for the straight final approach before the Cauchy endgame takes over. */
 const APPROACH_ATTEMPTS = 40;
+/** Angle (radians) by which a retry turns the endgame's ray into the complex t-plane (common practice, no source). */
+const RETRY_TURN = 0.5;
 
 /** A path tracker bound to one homotopy; buffers are made once here and reused for every path. */
 export interface Tracker {
@@ -17,7 +19,8 @@ export interface Tracker {
    * Tracks one path from `start` (packed complex, length 2n, not modified) at real t = tStart to tEnd and returns
    * its end in the homotopy's own coordinates. Stages: predictor–corrector to tEnd ∓ endgameStart; a straight
    * approach to tEnd (≤ 40 attempts, aborted when the condition estimate passes singularCondition); else the
-   * Cauchy endgame. A failed path is re-tracked up to settings.retries times with stricterSettings; steps and
+   * Cauchy endgame. A failed path is re-tracked up to settings.retries times with stricterSettings, its endgame ray
+   * turned by ±0.5 rad into the complex plane (t = tEnd + r·u·e^{±0.5i}); steps and
    * rejections are summed over all attempts. Outcome 'at-infinity' needs homotopy.infinityDistance.
    * windingNumber is 0 for a singular end whose loops never settled (undetermined).
    */
@@ -32,7 +35,7 @@ export function createTracker(homotopy: Homotopy, settings: Partial<TrackerSetti
   const len = 2 * homotopy.n;
   const saved = new Float64Array(len);
 
-  function attempt(x: Float64Array, tStart: number, tEnd: number): { status: SegmentStatus; winding: number; diverged: boolean } {
+  function attempt(x: Float64Array, tStart: number, tEnd: number, retry: number): { status: SegmentStatus; winding: number; diverged: boolean } {
     const s = stepper.settings;
     const span = Math.abs(tEnd - tStart);
     const u = tStart < tEnd ? -1 : 1;
@@ -50,7 +53,15 @@ export function createTracker(homotopy: Homotopy, settings: Partial<TrackerSetti
       return { status: 'ok', winding: 1, diverged: false };
     }
     x.set(saved);
-    const result = endgame(x, tEnd, 0, u, 0, s.endgameStart);
+    // retry k approaches the end along the ray t = tEnd + r·u·e^{iθ}, θ = ±RETRY_TURN (sign alternating): the
+    // endgame's samples then avoid a near-singularity just off the real segment, which no step size gets past
+    const theta = retry === 0 ? 0 : (retry % 2 === 1 ? 1 : -1) * RETRY_TURN;
+    const uRe = u * Math.cos(theta), uIm = u * Math.sin(theta);
+    if (retry > 0) {
+      const turned = stepper.segment(x, tE, 0, tEnd + s.endgameStart * uRe, s.endgameStart * uIm);
+      if (turned !== 'ok') return { status: turned, winding: 1, diverged: false };
+    }
+    const result = endgame(x, tEnd, 0, uRe, uIm, s.endgameStart);
     if (result.status === 'ok' && result.winding === 1 && !result.diverged) stepper.newton(x, tEnd, 0, s.finalTolerance, 6);
     return { status: result.status, winding: result.winding, diverged: result.diverged };
   }
@@ -64,7 +75,7 @@ export function createTracker(homotopy: Homotopy, settings: Partial<TrackerSetti
       stepper.rejected = 0;
       stepper.stepSize = stepper.settings.maxStep / 4;
       const x = Float64Array.from(start);
-      const { status, winding, diverged } = attempt(x, tStart, tEnd);
+      const { status, winding, diverged } = attempt(x, tStart, tEnd, k);
       steps += stepper.steps;
       rejected += stepper.rejected;
       const finite = allFinite(x, len);

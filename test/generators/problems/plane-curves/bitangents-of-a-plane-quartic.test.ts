@@ -48,9 +48,10 @@ describe('solving bitangents of a plane quartic', () => {
     expect(report.stats).toMatchObject({ tracked: 288, regular: 28, singular: 0, atInfinity: 260, failed: 0 });
   };
   const title = 'random complex quartic %i: 28 bitangents, the other 260 paths at infinity, none failed';
-  // Seeds 2 and 13 fail through engine issues reported to the lead: on 2 one path to infinity ends 'failed'
-  // (no convergence); on 13 one path to infinity is classified singular. All 28 bitangents are found on both.
-  const { checked, skipped } = splitSeeds(seeds(20), [2, 13]);
+  // Seed 13 fails through an engine issue reported to the lead: one path to infinity ends as a singular cluster
+  // at |x| ≈ 157 (residual 1.4e2; the distance to infinity stalls near 0.012 before the endgame gives up). All 28
+  // bitangents are found. (Seed 2 failed one path near infinity until retries turned the endgame's ray.)
+  const { checked, skipped } = splitSeeds(seeds(20), [13]);
   it.each(checked)(title, check);
   it.skip.each(skipped)(`${title} (engine issue)`, check);
 
@@ -73,8 +74,10 @@ describe('solving bitangents of a plane quartic', () => {
 
 // Cases found beyond the 20 seeds above. 1002 once reported a path stopped short of infinity as a 29th
 // "solution" (residual 3.5e3, condition 3e18); regular ends must now solve the target (toAffineEnd).
-// 1014 still fails through an engine issue reported to the lead: two paths to infinity fail by step underflow
-// after their retries, and only 27 bitangents are found.
+// 1014 still fails through an engine issue reported to the lead: only 27 bitangents are found; the missing one,
+// (m, k, α, β) ≈ (−0.08 − 0.82i, 2.19 + 0.28i, 9.6 − 12.6i, −138 − 119i), lies far out in (α, β) (found with path
+// seed 7). Paths 22 and 23 failed by step underflow before retries turned the endgame's ray; they now end at
+// infinity (steady valuation 1/3), so the lost path is not yet identified.
 describe('bitangents: cases beyond the tested seeds', () => {
   const check = async (seed: number) => {
     const { report } = await solveInstance(definition, randomInstance(seed));
