@@ -74,10 +74,12 @@ describe('solving bitangents of a plane quartic', () => {
 
 // Cases found beyond the 20 seeds above. 1002 once reported a path stopped short of infinity as a 29th
 // "solution" (residual 3.5e3, condition 3e18); regular ends must now solve the target (toAffineEnd).
-// 1014 still fails through an engine issue reported to the lead: only 27 bitangents are found; the missing one,
-// (m, k, α, β) ≈ (−0.08 − 0.82i, 2.19 + 0.28i, 9.6 − 12.6i, −138 − 119i), lies far out in (α, β) (found with path
-// seed 7). Paths 22 and 23 failed by step underflow before retries turned the endgame's ray; they now end at
-// infinity (steady valuation 1/3), so the lost path is not yet identified.
+// 1014 still fails through an engine issue reported to the lead: only 27 bitangents are found. The missing one,
+// (m, k, α, β) ≈ (−0.08 − 0.82i, 2.19 + 0.28i, 9.6 − 12.6i, −138 − 119i) (found with path seed 7; tracked back
+// from t = 1 it reaches start 105), lies at relative distance 0.0055 of infinity in (α, β): path 105 closes in on
+// it like s^(1/3) down to s = 1.5e-6, so the divergence test calls it at infinity at distance 0.017 (the
+// endgame's documented blind spot). Paths 22 and 23, which failed by step underflow, end at infinity since
+// retries turn the endgame's ray.
 describe('bitangents: cases beyond the tested seeds', () => {
   const check = async (seed: number) => {
     const { report } = await solveInstance(definition, randomInstance(seed));
