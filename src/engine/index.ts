@@ -3,7 +3,7 @@ export type { ExprNode, ExprKind, PolynomialSystem } from './expr/node.ts';
 export type { Homotopy, LinearSolver, PathEnd, PathOutcome, FailureReason } from './homotopy.ts';
 export { ENGINE_VERSION } from './version.ts';
 export { createRandom, type RandomSource } from './random.ts';
-export { compileSystem, compiledFromSource, type CompiledSystem, type SystemShape, type SystemEvaluator } from './compile/compile-system.ts';
+export { compileSystem, compiledFromSource, type CompiledEquations, type SystemShape, type SystemEvaluator } from './compile/compile-system.ts';
 export { createDenseLU, type DenseSolver } from './linalg/dense-lu.ts';
 export { createTracker, INFINITY_TOLERANCE, type Tracker } from './track/tracker.ts';
 export { DEFAULT_TRACKER_SETTINGS, stricterSettings, type TrackerSettings } from './track/settings.ts';

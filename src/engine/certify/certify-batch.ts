@@ -1,5 +1,5 @@
 import type { PolynomialSystem } from '../expr/node.ts';
-import { compileCertifiableSystem, type CertifiableSystem } from './compiled-system.ts';
+import { compileCertifiableSystem, type CertifiableSystem } from './certifiable-system.ts';
 import { createPointCertifier, type PointCertificate, type PointCertifierOptions } from './certify-point.ts';
 
 /** A batch of points to certify, in a structured-cloneable form (the body of a worker message). */

@@ -1,5 +1,5 @@
 import { inflateBox, startRadii } from './box-search.ts';
-import type { CertifiableSystem } from './compiled-system.ts';
+import type { CertifiableSystem } from './certifiable-system.ts';
 import { invertComplex, multiplyComplex } from './complex-inverse.ts';
 import { refineExactly } from './exact-refinement.ts';
 import { createPointWorkspace } from './point-workspace.ts';

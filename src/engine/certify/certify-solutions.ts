@@ -1,5 +1,5 @@
 import type { PolynomialSystem } from '../expr/node.ts';
-import { compileCertifiableSystem, type CertifiableSystem } from './compiled-system.ts';
+import { compileCertifiableSystem, type CertifiableSystem } from './certifiable-system.ts';
 import { createPointCertifier, type PointCertificate, type PointCertifierOptions } from './certify-point.ts';
 import { settleDistinct } from './settle-distinct.ts';
 

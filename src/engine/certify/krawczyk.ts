@@ -1,7 +1,7 @@
 import { widenDown, widenUp } from '../interval/outward.ts';
 import { midRadius } from '../interval/dot-bound.ts';
 import { addProduct, matrixEntry, subtractScaled } from './krawczyk-kernels.ts';
-import type { CertifiableSystem } from './compiled-system.ts';
+import type { CertifiableSystem } from './certifiable-system.ts';
 
 /**
  * Krawczyk's test (Krawczyk, Computing 4, 1969; Rump's form with an approximate inverse Y) on a complex box X

@@ -1,4 +1,4 @@
-import type { CertifiableSystem } from './compiled-system.ts';
+import type { CertifiableSystem } from './certifiable-system.ts';
 import { createKrawczykTester, type KrawczykTester } from './krawczyk.ts';
 
 /**

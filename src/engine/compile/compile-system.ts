@@ -23,7 +23,7 @@ export interface SystemShape {
 export type SystemEvaluator = (x: Float64Array, p: Float64Array, v: Float64Array, jx: Float64Array | null, jp: Float64Array | null) => void;
 
 /** A system compiled to one straight-line function; `source` rebuilds it anywhere (see compiledFromSource). */
-export interface CompiledSystem extends SystemShape {
+export interface CompiledEquations extends SystemShape {
   readonly evaluate: SystemEvaluator;
   readonly source: string;
   /** The SSA program behind the source (present when compiled here, absent when rebuilt from source). */
@@ -35,7 +35,7 @@ export interface CompiledSystem extends SystemShape {
  * reverse-mode differentiation, and ∂F/∂p, hash-consing identical subtrees (common-subexpression elimination).
  * Throws RangeError naming the equation when an unknown or parameter index is out of range.
  */
-export function compileSystem(system: PolynomialSystem, options: { derivativeParameters?: readonly number[] } = {}): CompiledSystem {
+export function compileSystem(system: PolynomialSystem, options: { derivativeParameters?: readonly number[] } = {}): CompiledEquations {
   const n = system.unknowns.length, np = system.parameters.length, neq = system.equations.length;
   const tape = createTape();
   const memo = new Map();
@@ -79,7 +79,7 @@ const EVALUATOR_CACHE_SIZE = 32;
  * Functions are cached by source text (the last 32), so a system of the same structure reuses warm, already
  * optimised code across solves and instances (the source carries no parameter values).
  */
-export function compiledFromSource(source: string, shape: SystemShape): CompiledSystem {
+export function compiledFromSource(source: string, shape: SystemShape): CompiledEquations {
   let evaluate = evaluators.get(source);
   if (evaluate === undefined) {
     evaluate = new Function(source)() as SystemEvaluator;

@@ -1,5 +1,5 @@
 import type { Homotopy } from '../homotopy.ts';
-import type { CompiledSystem } from '../compile/compile-system.ts';
+import type { CompiledEquations } from '../compile/compile-system.ts';
 
 /**
  * H(x, t) = F(x; t, q): parameter 0 of the compiled system is the path parameter t itself and the others are
@@ -7,7 +7,7 @@ import type { CompiledSystem } from '../compile/compile-system.ts';
  * derivativeParameters [0], so jp is ∂H/∂t. Used for start-system homotopies whose random data (γ, charts,
  * forms) are parameters, so the compiled code is shared by every solve of the same structure.
  */
-export function firstParameterHomotopy(compiled: CompiledSystem, rest: Float64Array): Homotopy {
+export function firstParameterHomotopy(compiled: CompiledEquations, rest: Float64Array): Homotopy {
   const { n, np, neq } = compiled;
   if (neq !== n) throw new RangeError(`homotopy needs a square system, got ${neq} equations in ${n} unknowns`);
   if (rest.length !== 2 * (np - 1)) throw new RangeError(`fixed parameters must have length ${2 * (np - 1)}, got ${rest.length}`);

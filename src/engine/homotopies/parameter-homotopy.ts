@@ -1,5 +1,5 @@
 import type { Homotopy } from '../homotopy.ts';
-import type { CompiledSystem } from '../compile/compile-system.ts';
+import type { CompiledEquations } from '../compile/compile-system.ts';
 import { matVec } from '../complex/packed.ts';
 
 /**
@@ -8,7 +8,7 @@ import { matVec } from '../complex/packed.ts';
  * gamma trick τ(t) = γt / (1 + (γ − 1)t), which keeps τ off the real segment for 0 < t < 1 while τ(0) = 0,
  * τ(1) = 1. ∂H/∂t = J_p·(p1 − p0)·dτ/dt. The compiled system must be square (neq = n). Buffers are made once.
  */
-export function parameterHomotopy(compiled: CompiledSystem, p0: Float64Array, p1: Float64Array, gamma?: Float64Array): Homotopy {
+export function parameterHomotopy(compiled: CompiledEquations, p0: Float64Array, p1: Float64Array, gamma?: Float64Array): Homotopy {
   const { n, np, neq } = compiled;
   if (neq !== n) throw new RangeError(`parameter homotopy needs a square system, got ${neq} equations in ${n} unknowns`);
   if (p0.length !== 2 * np || p1.length !== 2 * np) throw new RangeError(`parameter vectors must have length ${2 * np} (packed complex)`);

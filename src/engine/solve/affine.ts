@@ -1,4 +1,4 @@
-import type { CompiledSystem } from '../compile/compile-system.ts';
+import type { CompiledEquations } from '../compile/compile-system.ts';
 import { createDenseLU } from '../linalg/dense-lu.ts';
 import { normInf } from '../complex/packed.ts';
 
@@ -16,7 +16,7 @@ export interface AffineTools {
 }
 
 /** Creates AffineTools for F(·; parameters). */
-export function createAffineTools(compiled: CompiledSystem, parameters: Float64Array): AffineTools {
+export function createAffineTools(compiled: CompiledEquations, parameters: Float64Array): AffineTools {
   const { n } = compiled;
   const v = new Float64Array(2 * n), jac = new Float64Array(2 * n * n), dx = new Float64Array(2 * n), best = new Float64Array(2 * n);
   const lu = createDenseLU(n);

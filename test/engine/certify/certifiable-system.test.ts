@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { add, constant, mul, neg, param, pow, sub, unknown } from '../../../src/engine/expr/build.ts';
 import type { ExprNode, PolynomialSystem } from '../../../src/engine/expr/node.ts';
-import { compileCertifiableSystem } from '../../../src/engine/certify/compiled-system.ts';
+import { compileCertifiableSystem } from '../../../src/engine/certify/certifiable-system.ts';
 import { createRandom, type RandomSource } from '../../../src/engine/random.ts';
 import { inside } from '../interval/exact-rational.ts';
 import { exactEvaluate } from './exact-evaluate.ts';
