@@ -4,6 +4,7 @@ import type { ExprNode } from '../../../src/engine/expr/node.ts';
 import { fitWindow } from '../shared/fit-window.ts';
 import { genericInstance } from '../shared/generic-instance.ts';
 import { normalizeByLargest } from '../shared/normalize.ts';
+import { conicLadderSource } from './ladder-source.ts';
 
 /** The characteristic numbers of conics: through p general points and tangent to 5 − p general lines. */
 export const characteristicNumbers: Readonly<Record<number, number>> = { 5: 1, 4: 2, 3: 4, 2: 4, 1: 2, 0: 1 };
@@ -108,14 +109,7 @@ export function pointLineProblem(p: number, genericSeed: number, demo: PointLine
     },
     trueCount: {
       value: count,
-      source: {
-        kind: 'published',
-        authors: ['A. Bashelor', 'A. Ksir', 'W. Traves'],
-        year: 2008,
-        title: 'Enumerative algebraic geometry of conics',
-        venue: 'The American Mathematical Monthly 115 (2008), 701–728',
-        note: 'The characteristic numbers 1, 2, 4, 4, 2, 1 go back to Chasles (Comptes Rendus, 1864). Page range and exact title from memory.',
-      },
+      source: conicLadderSource('The characteristic numbers 1, 2, 4, 4, 2, 1 go back to Chasles (Comptes Rendus, 1864). Page range and exact title from memory.'),
     },
     excessNote:
       bound === count

@@ -10,15 +10,7 @@ import { settleDistinct } from './settle-distinct.ts';
  * *as given* (in the system's own chart, which may be a random complex one) are real. sameAs: the index of an
  * earlier solution proven to be the same one (their boxes overlap and the hull passed).
  */
-export interface CertifiedSolution {
-  certified: boolean;
-  certifiedReal: boolean;
-  /** Interval box, [reLo, reHi, imLo, imHi] per unknown (empty when not certified). */
-  box: Float64Array;
-  /** Largest half-width of the box. */
-  radius: number;
-  /** A tighter box inside `box` that holds the same solution (Krawczyk's image K(X)); empty when not certified. */
-  enclosure: Float64Array;
+export interface CertifiedSolution extends PointCertificate {
   /** Why not certified, or why not counted as distinct. */
   reason?: string;
   sameAs?: number;
