@@ -11,6 +11,8 @@ export default defineConfig({
   site: 'https://atlas.enumerative.example',
   output: 'static',
   trailingSlash: 'always',
+  // Static files live under src/ so that the top level keeps only the project's fixed entries.
+  publicDir: './src/public',
   build: { format: 'directory' },
   compressHTML: true,
   markdown: {
