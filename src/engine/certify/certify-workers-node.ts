@@ -1,6 +1,7 @@
 import { Worker } from 'node:worker_threads';
 import type { CertifiedBatch, CertifyBatch } from './certify-batch.ts';
 import { keepAlive, type KeepAlive } from '../pool/keep-alive.ts';
+import { requestWorker } from '../pool/worker-request.ts';
 
 /** Long-lived certification workers (Node backend): run(batch) on an idle worker; each keeps Node alive only while it has a batch. */
 export interface CertifyWorkers {
@@ -15,21 +16,8 @@ export function createCertifyWorkers(size: number): CertifyWorkers {
   const workers = Array.from({ length: size }, () => new Worker(new URL('./certify-worker.ts', import.meta.url)));
   const alive = new Map<Worker, KeepAlive>(workers.map((w) => [w, keepAlive(w)]));
   let nextId = 0;
-  const run = (worker: Worker, batch: CertifyBatch): Promise<CertifiedBatch> => new Promise((resolve, reject) => {
-    const id = nextId++;
-    const onMessage = (m: { id: number; result?: CertifiedBatch; error?: string }): void => {
-      if (m.id !== id) return;
-      cleanup();
-      if (m.error !== undefined) reject(new Error(`certification worker failed: ${m.error}`));
-      else resolve(m.result!);
-    };
-    const onError = (e: Error): void => { cleanup(); reject(e); };
-    const cleanup = (): void => { worker.off('message', onMessage); worker.off('error', onError); alive.get(worker)!.release(); };
-    alive.get(worker)!.hold();
-    worker.on('message', onMessage);
-    worker.on('error', onError);
-    worker.postMessage({ id, batch });
-  });
+  const run = (worker: Worker, batch: CertifyBatch): Promise<CertifiedBatch> =>
+    requestWorker<CertifiedBatch>(worker, alive.get(worker)!, nextId++, { batch }, 'result', 'certification worker');
   return {
     size,
     async runAll(next) {

@@ -3,6 +3,7 @@ import { availableParallelism } from 'node:os';
 import type { PathEnd } from '../homotopy.ts';
 import type { PathJob, TrackingPool } from './job.ts';
 import { keepAlive, type KeepAlive } from './keep-alive.ts';
+import { requestWorker } from './worker-request.ts';
 
 /**
  * The Node backend of the tracking pool: `size` long-lived worker_threads (default availableParallelism()).
@@ -18,21 +19,8 @@ export function createNodePool(size = availableParallelism()): TrackingPool {
   const alive = new Map<Worker, KeepAlive>(workers.map((w) => [w, keepAlive(w)]));
   let nextId = 0;
   let terminated = false;
-  const run = (worker: Worker, job: PathJob): Promise<PathEnd[]> => new Promise((resolve, reject) => {
-    const id = nextId++;
-    const onMessage = (m: { id: number; ends?: PathEnd[]; error?: string }): void => {
-      if (m.id !== id) return;
-      cleanup();
-      if (m.error !== undefined) reject(new Error(`pool worker failed: ${m.error}`));
-      else resolve(m.ends!);
-    };
-    const onError = (e: Error): void => { cleanup(); reject(e); };
-    const cleanup = (): void => { worker.off('message', onMessage); worker.off('error', onError); alive.get(worker)!.release(); };
-    alive.get(worker)!.hold();
-    worker.on('message', onMessage);
-    worker.on('error', onError);
-    worker.postMessage({ id, job }, [job.starts.buffer as ArrayBuffer]);
-  });
+  const run = (worker: Worker, job: PathJob): Promise<PathEnd[]> =>
+    requestWorker<PathEnd[]>(worker, alive.get(worker)!, nextId++, { job }, 'ends', 'pool worker', [job.starts.buffer as ArrayBuffer]);
   return {
     size,
     async track(job, onProgress) {
