@@ -3,6 +3,9 @@ import { add, mul, param, sub } from '../expr/build.ts';
 import { degree, groupDegrees } from '../expr/degree.ts';
 import { createRandom } from '../random.ts';
 import { compileSystem } from '../compile/compile-system.ts';
+import { substituteUnknowns } from '../expr/substitute.ts';
+import type { SystemScaling } from './scaling.ts';
+import { naturalUnits } from './natural-units.ts';
 import type { CompiledHomotopyArgs } from '../homotopies/compiled-module.ts';
 import { validateGroups } from './groups.ts';
 import { multihomogenize } from './homogenize.ts';
@@ -13,6 +16,8 @@ import { multihomogeneousStart } from './multihomogeneous.ts';
 /** Everything needed to track a start system to the target: the homotopy's module arguments and start points. */
 export interface HomotopyPlan {
   readonly startSystem: 'total-degree' | 'multihomogeneous';
+  /** The target's natural units: the homotopy tracks y with x = 2^c ⊙ y, equation i scaled by 2^{r_i}. */
+  readonly scaling: SystemScaling;
   /** Multiprojective groups in homotopy coordinates (homogenising coordinate last). */
   readonly projectiveGroups: readonly (readonly number[])[];
   /** Homotopy coordinates: N = n + number of groups. */
@@ -26,11 +31,13 @@ export interface HomotopyPlan {
  * Plans the homotopy H(X, t) = (1 − t)·γ·G(X) + t·F̂(X) (F̂: the target multihomogenised), with one random
  * complex chart equation per group left unchanged along the path: the gamma trick of Morgan (1987) with γ
  * uniform on the unit circle. Random draws from `seed`, in this order: γ, the charts (group by group,
- * Gaussian complex), then the start system's forms. Same seed ⇒ same plan. Everything random and the target's
- * parameter values enter the compiled code as parameters (t first), so the code depends only on the
- * system's structure and stays warm across solves and instances.
+ * Gaussian complex), then the start system's forms. Same seed ⇒ same plan. The target is tracked in its natural
+ * units (`scaling`, see coefficientScaling): F̂ becomes diag(2^r)·F̂(2^c ⊙ y, h), so its coefficients are near 1 in
+ * modulus and its solutions near the unit sphere whatever units the definition was written in. Everything random,
+ * the scale factors and the target's parameter values enter the compiled code as parameters (t first), so the code
+ * depends only on the system's structure and stays warm across solves and instances.
  */
-export function planHomotopy(system: PolynomialSystem, parameters: Float64Array, seed: number, kind: 'total-degree' | 'multihomogeneous'): HomotopyPlan {
+export function planHomotopy(system: PolynomialSystem, parameters: Float64Array, seed: number, kind: 'total-degree' | 'multihomogeneous', scaling: SystemScaling = naturalUnits(system, parameters)): HomotopyPlan {
   const np = system.parameters.length;
   if (parameters.length !== 2 * np) {
     throw new RangeError(`expected ${np} parameter values (packed length ${2 * np}), got length ${parameters.length}`);
@@ -63,7 +70,10 @@ export function planHomotopy(system: PolynomialSystem, parameters: Float64Array,
   const start: StartSystem = kind === 'total-degree'
     ? totalDegreeStart(system.equations.map((e) => degree(e)), charts[0]!)
     : multihomogeneousStart(groupDegrees(system.equations, groups), groups, charts, random, bank);
-  const target = multihomogenize(system.equations, groups, n, (node) => param(node.name, node.index + 1));
+  const homogeneous = multihomogenize(system.equations, groups, n, (node) => param(node.name, node.index + 1));
+  const units = scaling.variables.map((c) => bank.add(2 ** c, 0));
+  const rows = scaling.equations.map((r) => bank.add(2 ** r, 0));
+  const target = substituteUnknowns(homogeneous, (node) => (node.index < n ? mul(units[node.index]!, node) : node)).map((f, i) => mul(rows[i]!, f));
   const t = param('t', 0);
   const equations: ExprNode[] = target.map((f, i) => add(mul(sub(1, t), gamma, start.equations[i]!), mul(t, f)));
   equations.push(...chartRows);
@@ -75,5 +85,5 @@ export function planHomotopy(system: PolynomialSystem, parameters: Float64Array,
     fixed: new Float64Array(values),
     projectiveGroups: coords,
   };
-  return { startSystem: kind, projectiveGroups: coords, N, count: start.count, starts: start.starts, args };
+  return { startSystem: kind, scaling, projectiveGroups: coords, N, count: start.count, starts: start.starts, args };
 }
