@@ -11,7 +11,7 @@ export const complexSchema = z.tuple([z.number(), z.number()]);
 /** One solution of one instance, in the coordinates named by the record's `coordinates`. */
 export const solutionSchema = z.object({
   values: z.array(complexSchema),
-  /** ‖F(x)‖∞ / (1 + ‖x‖∞) after refinement. */
+  /** Backward error max_i |f_i(x)| / |f_i|(|x|) after refinement (scale-free; f_i evaluated with every term's modulus below). */
   residual: z.number().nonnegative(),
   /** Condition estimate of the Jacobian at the solution; null when singular (infinite). */
   condition: z.number().positive().nullable(),
@@ -22,20 +22,37 @@ export const solutionSchema = z.object({
   certifiedReal: z.boolean(),
 });
 
-/** How the paths of one solve ended; the four outcomes add up to `tracked`. */
+/** What the solver's review of the path ends did (total-degree and multihomogeneous solves). */
+export const retrackStatsSchema = z.object({
+  /** Paths re-tracked because their nonsingular end coincided with another path's (a path jump). */
+  jumpPaths: z.number().int().nonnegative(),
+  /** Of those, paths whose re-track ended at a different point. */
+  recoveredJumps: z.number().int().nonnegative(),
+  /** Paths still sharing a nonsingular end with another after every re-track. */
+  unresolvedJumps: z.number().int().nonnegative(),
+  /** Paths re-tracked in double-double precision because they failed or ended undecided in double precision. */
+  extendedPaths: z.number().int().nonnegative(),
+  /** Of those, paths the re-track decided. */
+  extendedDecided: z.number().int().nonnegative(),
+});
+
+/** How the paths of one solve ended; the five outcomes add up to `tracked`. */
 export const pathStatsSchema = z
   .object({
     tracked: z.number().int().nonnegative(),
     nonsingular: z.number().int().nonnegative(),
     singular: z.number().int().nonnegative(),
+    /** Paths ending on a positive-dimensional solution set (where the naive count's excess goes); 0 in records before it was counted. */
+    excess: z.number().int().nonnegative().default(0),
     atInfinity: z.number().int().nonnegative(),
     failed: z.number().int().nonnegative(),
     failures: z.record(z.string(), z.number().int().nonnegative()),
     stepsMedian: z.number().nonnegative(),
     stepsMax: z.number().int().nonnegative(),
     retries: z.number().int().nonnegative(),
+    retracks: retrackStatsSchema.optional(),
   })
-  .refine((p) => p.nonsingular + p.singular + p.atInfinity + p.failed === p.tracked, {
+  .refine((p) => p.nonsingular + p.singular + p.excess + p.atInfinity + p.failed === p.tracked, {
     error: 'path outcomes do not add up to the paths tracked',
   });
 
@@ -106,6 +123,7 @@ export const solveRecordSchema = z.object({
 
 export type Solution = z.infer<typeof solutionSchema>;
 export type PathStats = z.infer<typeof pathStatsSchema>;
+export type RetrackStats = z.infer<typeof retrackStatsSchema>;
 export type Counts = z.infer<typeof countsSchema>;
 export type InstanceResult = z.infer<typeof instanceResultSchema>;
 export type HistoryEntry = z.infer<typeof historyEntrySchema>;

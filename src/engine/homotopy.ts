@@ -37,8 +37,12 @@ export interface LinearSolver {
   solve(b: Float64Array, out: Float64Array): void;
 }
 
-/** How a tracked path ended. Every tracked path gets exactly one of these. */
-export type PathOutcome = 'regular' | 'singular' | 'at-infinity' | 'failed';
+/**
+ * How a tracked path ended. Every tracked path gets exactly one of these: 'regular' (a finite nonsingular solution),
+ * 'singular' (an isolated finite singular solution), 'excess' (a point of a positive-dimensional solution set, where
+ * the naive count's excess goes), 'at-infinity', or 'failed' (the tracker could not follow the path to its end).
+ */
+export type PathOutcome = 'regular' | 'singular' | 'excess' | 'at-infinity' | 'failed';
 
 /** Why a path failed, when it did. */
 export type FailureReason = 'step-underflow' | 'step-budget' | 'no-convergence' | 'non-finite';
@@ -48,6 +52,8 @@ export interface PathEnd {
   readonly outcome: PathOutcome;
   /** The endpoint (packed complex, length 2n); for 'at-infinity' and 'failed' it is the last point reached. */
   readonly point: Float64Array;
+  /** true when `point` is a direction at infinity (X_0 … X_{n−1}) / max_j |X_j| rather than a finite point. */
+  readonly direction?: true;
   /** ‖H(x, 1)‖∞ / (1 + ‖x‖∞) at the endpoint. */
   readonly residual: number;
   /** Condition estimate of ∂H/∂x at the endpoint (Infinity when singular). */
@@ -62,4 +68,17 @@ export interface PathEnd {
   readonly retries: number;
   /** Present only for 'failed'. */
   readonly failure?: FailureReason;
+  /**
+   * Present when the solver tracked the path again after its first end: why ('jump': its nonsingular end coincided
+   * with another path's; 'failed' or 'undecided': it failed, or ended singular with no winding number, in double
+   * precision), in which precision the end now shown was reached, and whether the re-track changed the end.
+   */
+  readonly retrack?: PathRetrack;
+}
+
+/** Why and how a path was tracked again (see PathEnd.retrack). */
+export interface PathRetrack {
+  readonly reason: 'jump' | 'failed' | 'undecided';
+  readonly precision: 'double' | 'double-double';
+  readonly changed: boolean;
 }

@@ -5,7 +5,7 @@ export { ENGINE_VERSION } from './version.ts';
 export { createRandom, type RandomSource } from './random.ts';
 export { compileSystem, compiledFromSource, type CompiledEquations, type SystemShape, type SystemEvaluator } from './compile/compile-system.ts';
 export { createDenseLU, type DenseSolver } from './linalg/dense-lu.ts';
-export { createTracker, INFINITY_TOLERANCE, type Tracker } from './track/tracker.ts';
+export { createTracker, INFINITY_ACCURACY_FACTOR, type Tracker } from './track/tracker.ts';
 export { DEFAULT_TRACKER_SETTINGS, stricterSettings, type TrackerSettings } from './track/settings.ts';
 export { parameterHomotopy } from './homotopies/parameter-homotopy.ts';
 export { withProjectiveGroups } from './homotopies/projective-groups.ts';

@@ -4,6 +4,7 @@ import { createRandom } from '../random.ts';
 import { bezoutBound, multihomogeneousBound } from '../start/bounds.ts';
 import { isRealPoint } from '../solve/real.ts';
 import type { FoundSolution, PathStatistics, SolveReport } from '../solve/types.ts';
+import { pathStatistics } from '../solve/statistics.ts';
 import type { TrackerSettings } from '../track/settings.ts';
 import { createPointIndex } from './point-index.ts';
 import { createModuleLegTracker, type HomotopyModuleRef } from './module-tracker.ts';
@@ -130,17 +131,9 @@ function compareKeys(a: Float64Array, ka: (number | undefined)[], b: Float64Arra
 }
 
 
-/** Path counts that add up, with the median and largest step counts and the total retries. */
+/** Path counts that add up, with the median and largest step counts and the total retries (upper median of steps, as before). */
 export function statistics(ends: readonly PathEnd[]): PathStatistics {
-  const failures: Record<string, number> = {};
-  let regular = 0, singular = 0, atInfinity = 0, failed = 0, retries = 0;
-  for (const e of ends) {
-    if (e.outcome === 'regular') regular++;
-    else if (e.outcome === 'singular') singular++;
-    else if (e.outcome === 'at-infinity') atInfinity++;
-    else { failed++; failures[e.failure ?? 'unknown'] = (failures[e.failure ?? 'unknown'] ?? 0) + 1; }
-    retries += e.retries;
-  }
+  const stats = pathStatistics(ends);
   const steps = ends.map((e) => e.steps).sort((a, b) => a - b);
-  return { tracked: ends.length, regular, singular, atInfinity, failed, failures, stepsMedian: steps.length ? steps[steps.length >> 1]! : 0, stepsMax: steps.length ? steps[steps.length - 1]! : 0, retries };
+  return { ...stats, stepsMedian: steps.length ? steps[steps.length >> 1]! : 0 };
 }

@@ -1,38 +1,36 @@
 import type { PathEnd } from '../homotopy.ts';
-import { projectiveInfinityDistance } from '../homotopies/projective-groups.ts';
+import type { SystemScaling } from '../start/scaling.ts';
 import type { AffineTools } from './affine.ts';
-import { distInf, normInf } from '../complex/packed.ts';
 
-/** A singular end is re-judged nonsingular when ‖F(x)‖∞ / (1 + ‖x‖∞) ≤ this and κ(∂F/∂x) ≤ CLEARLY_NONSINGULAR. */
-export const AFFINE_RESIDUAL = 1e-8;
+/**
+ * A finite end solves the target when its backward error (AffineTools.residual: max_i |f_i(x)| / |f_i|(|x|)) is at
+ * most this after Newton's refinement. Genuine ends reach 1e-16 to 1e-14 (a few roundings per term); ends that do not
+ * solve the target sit at 1e-6 and above, so six orders of magnitude separate the two.
+ */
+export const SOLVED_BACKWARD_ERROR = 1e-10;
 /**
  * Far below the tracker's singular threshold (1e10): points of positive-dimensional solution sets show condition
  * estimates of 1e9–1e11 in double precision, so only a clearly nonsingular Jacobian overrides a singular verdict.
  */
 const CLEARLY_NONSINGULAR = 1e6;
-/**
- * A 'regular' end must solve the target: after Newton (relative 1e-13, ≤ 5 iterations) its residual is
- * ≤ AFFINE_RESIDUAL and its condition κ₁(∂F/∂x) ≤ this (κ·2⁻⁵² ≈ 1e-2: beyond it no digit of x is trustworthy).
- */
+/** A regular end's Jacobian condition κ₁ in natural units must be at most this (κ·2⁻⁵² ≈ 1e-2: past it no digit of x is trustworthy). */
 export const SANE_CONDITION = 1e14;
-/** Newton may move a regular end at most this far (relative): farther, it found some other point. */
+/** Newton may move a regular end at most this far (relative, natural units): farther, it found some other point. */
 const NEWTON_MOVE = 1e-6;
-/** A 'regular' end that fails the solve test within this relative distance of infinity (the endgame's divergence radius) is at infinity. */
-const NEAR_INFINITY = 0.02;
 
 /**
- * Turns a path end in multiprojective homotopy coordinates (groups: coordinate indices, homogenising one last)
- * into the target's coordinates: finite ends become x_j = X_j / h_g(j) with the affine residual and condition;
- * 'at-infinity' ends (and failed ends with some h_g = 0) carry the direction (X_0 … X_{n−1}) / max_j |X_j|
- * and keep the homotopy's residual and condition. A 'singular' finite end is re-judged on the target itself:
- * residual ≤ 1e-8 and condition ≤ 1e6 make it 'regular' (winding number 1). (A singular end close to infinity
- * stays 'singular': a slowly diverging path and a far finite singular point cannot be told apart here.)
- * A 'regular' end is kept only if it solves the target (see solvesTarget: Newton moves it ≤ 1e-6 relative to a
- * residual ≤ 1e-8 and condition ≤ 1e14); otherwise it is 'at-infinity' within relative distance 0.02 of infinity in the homotopy's
- * charts (a path the endgame stopped short of infinity), else 'failed' with reason 'no-convergence'.
+ * Turns a path end in multiprojective homotopy coordinates (groups: coordinate indices, homogenising one last; the
+ * unknowns in natural units y, see planHomotopy) into the target's unknowns x = 2^c ⊙ y. A 'regular' end (nonsingular
+ * in the homotopy's charts, and not at infinity to within its accuracy: the tracker decides that) is finite however
+ * large, and it is kept 'regular' only if it solves the target: Newton (relative 1e-13 in natural units, ≤ 5 iterations) moves
+ * it ≤ 1e-6 to a backward error ≤ SOLVED_BACKWARD_ERROR with κ ≤ 1e14; else it is 'failed' ('no-convergence'), for
+ * the solver to re-track. A 'singular' finite end with backward error ≤ SOLVED_BACKWARD_ERROR and κ ≤ 1e6 is re-judged
+ * 'regular' (the projective chart was badly scaled there). 'at-infinity' ends (and ends with some h_g = 0) carry the
+ * direction (Y_0 … Y_{n−1}) / max_j |Y_j| in natural units. Residuals of finite ends are backward errors.
  */
-export function toAffineEnd(end: PathEnd, groups: readonly (readonly number[])[], n: number, tools: AffineTools): PathEnd {
+export function toAffineEnd(end: PathEnd, groups: readonly (readonly number[])[], scaling: SystemScaling, tools: AffineTools): PathEnd {
   const X = end.point;
+  const n = scaling.variables.length;
   const x = new Float64Array(2 * n);
   let finite = end.outcome !== 'at-infinity';
   for (const g of groups) {
@@ -40,40 +38,32 @@ export function toAffineEnd(end: PathEnd, groups: readonly (readonly number[])[]
     const hr = X[2 * h]!, hi = X[2 * h + 1]!, d = hr * hr + hi * hi;
     if (!(d > 0) || !Number.isFinite(d)) finite = false;
     for (const j of g.slice(0, -1)) {
-      x[2 * j] = (X[2 * j]! * hr + X[2 * j + 1]! * hi) / d;
-      x[2 * j + 1] = (X[2 * j + 1]! * hr - X[2 * j]! * hi) / d;
+      const u = 2 ** scaling.variables[j]!;
+      x[2 * j] = (u * (X[2 * j]! * hr + X[2 * j + 1]! * hi)) / d;
+      x[2 * j + 1] = (u * (X[2 * j + 1]! * hr - X[2 * j]! * hi)) / d;
     }
   }
-  if (finite && x.every(Number.isFinite)) {
-    const residual = tools.residual(x), condition = tools.condition(x);
-    if (end.outcome === 'regular' && !solvesTarget(x, tools)) {
-      if (projectiveInfinityDistance(X, groups) <= NEAR_INFINITY) return direction({ ...end, outcome: 'at-infinity' }, X, n);
-      return { ...end, outcome: 'failed', failure: 'no-convergence', point: x, residual, condition };
-    }
-    if (end.outcome === 'singular' && residual <= AFFINE_RESIDUAL && condition <= CLEARLY_NONSINGULAR) {
-      // nonsingular after all (the projective chart was badly scaled there): winding number 1, implicit function theorem
-      return { ...end, outcome: 'regular', windingNumber: 1, point: x, residual, condition };
-    }
-    return { ...end, point: x, residual, condition };
+  if (!finite || !x.every(Number.isFinite)) return direction(end, X, n);
+  if (end.outcome === 'regular') {
+    const refined = Float64Array.from(x);
+    tools.newton(refined, 1e-13, 5);
+    const residual = tools.residual(refined), condition = tools.condition(refined);
+    if (tools.distance(x, refined) <= NEWTON_MOVE && residual <= SOLVED_BACKWARD_ERROR && condition <= SANE_CONDITION) return { ...end, point: x, residual: tools.residual(x), condition };
+    return { ...end, outcome: 'failed', failure: 'no-convergence', point: x, residual: tools.residual(x), condition: tools.condition(x) };
   }
-  return direction(end, X, n);
+  const residual = tools.residual(x), condition = tools.condition(x);
+  if (end.outcome === 'singular' && residual <= SOLVED_BACKWARD_ERROR && condition <= CLEARLY_NONSINGULAR) {
+    // nonsingular after all: winding number 1 by the implicit function theorem
+    return { ...end, outcome: 'regular', windingNumber: 1, point: x, residual, condition };
+  }
+  return { ...end, point: x, residual, condition };
 }
 
-/**
- * true when Newton from (a copy of) x (relative 1e-13, ≤ 5 iterations, as collectSolutions refines) stays within
- * relative 1e-6 of x and reaches residual ≤ AFFINE_RESIDUAL with condition ≤ SANE_CONDITION.
- */
-function solvesTarget(x: Float64Array, tools: AffineTools): boolean {
-  const refined = Float64Array.from(x);
-  tools.newton(refined, 1e-13, 5);
-  return distInf(refined, x) <= NEWTON_MOVE * (1 + normInf(x)) && tools.residual(refined) <= AFFINE_RESIDUAL && tools.condition(refined) <= SANE_CONDITION;
-}
-
-/** The end with its point replaced by the direction (X_0 … X_{n−1}) / max_j |X_j|. */
+/** The end with its point replaced by the direction (Y_0 … Y_{n−1}) / max_j |Y_j| (natural units). */
 function direction(end: PathEnd, X: Float64Array, n: number): PathEnd {
   const x = new Float64Array(2 * n);
   let m = 0;
   for (let j = 0; j < n; j++) m = Math.max(m, Math.hypot(X[2 * j]!, X[2 * j + 1]!));
   for (let i = 0; i < 2 * n; i++) x[i] = m > 0 ? X[i]! / m : X[i]!;
-  return { ...end, point: x };
+  return { ...end, point: x, direction: true };
 }

@@ -2,16 +2,21 @@ import type { PolynomialSystem } from '../expr/node.ts';
 import type { PathEnd } from '../homotopy.ts';
 import { compiledTarget } from './compiled-target.ts';
 import { bezoutBound, multihomogeneousBound } from '../start/bounds.ts';
-import { planHomotopy } from '../start/plan.ts';
+import { planHomotopy, type HomotopyPlan } from '../start/plan.ts';
 import { COMPILED_HOMOTOPY_MODULE, createHomotopy } from '../homotopies/compiled-module.ts';
 import { trackStarts } from '../pool/track-batch.ts';
 import { createTracker } from '../track/tracker.ts';
 import { sharedPool } from '../pool/shared-pool.ts';
 import type { PathJob } from '../pool/job.ts';
-import { createAffineTools } from './affine.ts';
+import { createAffineTools, type AffineTools } from './affine.ts';
+import { createLocalDimensionTest } from './local-dimension.ts';
+import { createRetracker } from './retracker.ts';
+import { reviewEnd, type PathReviewTools } from './review-ends.ts';
+import { recoverJumps } from './jump-review.ts';
 import { toAffineEnd } from './affine-end.ts';
 import { collectSolutions } from './collect.ts';
-import type { SolveOptions, SolveReport } from './types.ts';
+import { naturalUnits } from '../start/natural-units.ts';
+import type { SolveBounds, SolveOptions, SolveReport } from './types.ts';
 
 export type { FoundSolution, PathStatistics, SolveBounds, SolveOptions, SolveReport } from './types.ts';
 export { collectSolutions } from './collect.ts';
@@ -21,14 +26,17 @@ export { bezoutBound, multihomogeneousBound } from '../start/bounds.ts';
 /**
  * Solves a square polynomial system at the given parameter values (packed complex) by a total-degree or
  * multihomogeneous homotopy with the gamma trick in random charts (see planHomotopy), tracking every path of
- * the start system (or one shard of them) in-process or on the shared worker pool, then collectSolutions.
+ * the start system (or one shard of them) in-process or on the shared worker pool. Each end is reviewed
+ * (reviewEnd: excess ends, re-tracks of failed and undecided ends); a whole run then recovers path jumps and
+ * collects (finishSolve), a shard only collects its own ends (merge them with finishSolve).
  * Same seed ⇒ the same report (apart from `seconds`), with or without workers; shards merge exactly.
  */
 export async function solveSystem(system: PolynomialSystem, parameters: Float64Array, options: SolveOptions): Promise<SolveReport> {
   const began = performance.now();
   const kind = options.start ?? 'total-degree';
   const bounds = { bezoutBound: bezoutBound(system), multihomogeneousBound: multihomogeneousBound(system), startSystem: kind };
-  const plan = planHomotopy(system, parameters, options.seed, kind);
+  const scaling = naturalUnits(system, parameters);
+  const plan = planHomotopy(system, parameters, options.seed, kind, scaling);
   const [first, last] = shardRange(plan.count, options.shard);
   const job: PathJob = {
     homotopyModule: COMPILED_HOMOTOPY_MODULE,
@@ -43,11 +51,34 @@ export async function solveSystem(system: PolynomialSystem, parameters: Float64A
   if (workers > 0) raw = await (await sharedPool(workers)).track(job, options.onProgress);
   // in-process: the same homotopy and tracker a worker builds, without importing the module by URL (bundlers)
   else raw = trackStarts(createTracker(createHomotopy(plan.args)), job.starts, 0, 1, (done) => options.onProgress?.(done, last - first));
-  const tools = createAffineTools(compiledTarget(system), parameters);
-  const ends = raw.map((e) => toAffineEnd(e, plan.projectiveGroups, system.unknowns.length, tools));
-  const report = collectSolutions(system, parameters, ends, bounds, first);
+  const review = reviewToolsFor(system, parameters, plan);
+  const ends = raw.map((e, k) => reviewEnd(toAffineEnd(e, plan.projectiveGroups, scaling, review.tools), first + k, review));
+  const report = options.shard ? collectSolutions(system, parameters, ends, bounds, first) : finishWithReview(system, parameters, ends, bounds, plan, review);
   report.seconds = (performance.now() - began) / 1000;
   return report;
+}
+
+/**
+ * The last step of a solve, for a single run and for the merge of its shards alike: path-jump recovery over all
+ * ends (recoverJumps; the plan is rebuilt from the seed, deterministically), then collectSolutions. `ends` are the
+ * reviewed affine ends of every path in path order, as solveSystem (or its shards, concatenated) produced them.
+ */
+export function finishSolve(system: PolynomialSystem, parameters: Float64Array, ends: readonly PathEnd[], bounds: SolveBounds, seed: number): SolveReport {
+  const plan = planHomotopy(system, parameters, seed, bounds.startSystem, naturalUnits(system, parameters));
+  if (plan.count !== ends.length) throw new RangeError(`finishSolve: ${ends.length} ends given, the homotopy has ${plan.count} paths`);
+  return finishWithReview(system, parameters, [...ends], bounds, plan, reviewToolsFor(system, parameters, plan));
+}
+
+function finishWithReview(system: PolynomialSystem, parameters: Float64Array, ends: PathEnd[], bounds: SolveBounds, plan: HomotopyPlan, review: ReturnType<typeof reviewToolsFor>): SolveReport {
+  recoverJumps(ends, plan.scaling, review.retrack, (e, k) => reviewEnd(e, k, review), review.extended);
+  return collectSolutions(system, parameters, ends, bounds);
+}
+
+/** The affine tools, local dimension test and re-tracker of a planned solve. */
+function reviewToolsFor(system: PolynomialSystem, parameters: Float64Array, plan: HomotopyPlan): PathReviewTools & { tools: AffineTools } {
+  const compiled = compiledTarget(system);
+  const tools = createAffineTools(compiled, parameters, plan.scaling);
+  return { tools, retrack: createRetracker(plan, tools), localDimension: createLocalDimensionTest(compiled, parameters, plan.scaling, tools), extended: false };
 }
 
 /** The half-open path range [first, last) of shard index/count over `total` paths (the whole range without a shard). */

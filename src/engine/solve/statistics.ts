@@ -3,11 +3,12 @@ import type { PathStatistics } from './types.ts';
 
 /** Counts outcomes (they add up to ends.length), failure reasons (sorted keys), steps median/max and retries. */
 export function pathStatistics(ends: readonly PathEnd[]): PathStatistics {
-  const stats: PathStatistics = { tracked: ends.length, regular: 0, singular: 0, atInfinity: 0, failed: 0, failures: {}, stepsMedian: 0, stepsMax: 0, retries: 0 };
+  const stats: PathStatistics = { tracked: ends.length, regular: 0, singular: 0, excess: 0, atInfinity: 0, failed: 0, failures: {}, stepsMedian: 0, stepsMax: 0, retries: 0 };
   const failures = new Map<string, number>();
   for (const e of ends) {
     if (e.outcome === 'regular') stats.regular++;
     else if (e.outcome === 'singular') stats.singular++;
+    else if (e.outcome === 'excess') stats.excess++;
     else if (e.outcome === 'at-infinity') stats.atInfinity++;
     else {
       stats.failed++;

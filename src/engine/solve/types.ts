@@ -26,11 +26,13 @@ export interface FoundSolution {
   paths: number[];
 }
 
-/** Path counts that add up: tracked = regular + singular + atInfinity + failed. */
+/** Path counts that add up: tracked = regular + singular + excess + atInfinity + failed. */
 export interface PathStatistics {
   tracked: number;
   regular: number;
   singular: number;
+  /** Paths ending on a positive-dimensional solution set (see PathOutcome 'excess'). */
+  excess: number;
   atInfinity: number;
   failed: number;
   failures: Record<string, number>;
@@ -47,6 +49,20 @@ export interface SolveBounds {
   startSystem: 'total-degree' | 'multihomogeneous';
 }
 
+/** What the solver's review of the ends did: path-jump recovery and re-tracking in double-double precision. */
+export interface RetrackSummary {
+  /** Paths re-tracked because they ended at the same nonsingular point as another path. */
+  jumpPaths: number;
+  /** Of those, paths whose re-track ended at a different point: jumps recovered. */
+  recoveredJumps: number;
+  /** Paths still sharing a nonsingular end with another after every re-track (each shows as multiplicity > 1). */
+  unresolvedJumps: number;
+  /** Paths re-tracked in double-double precision because they failed or ended undecided in double precision. */
+  extendedPaths: number;
+  /** Of those, paths whose re-track reached a verdict other than 'failed' or undecided. */
+  extendedDecided: number;
+}
+
 /** What solveSystem returns. */
 export interface SolveReport extends SolveBounds {
   /** One per tracked path, in path order (affine coordinates where finite, see toAffineEnd). */
@@ -56,5 +72,7 @@ export interface SolveReport extends SolveBounds {
   /** Distinct finite singular clusters with multiplicity estimates. */
   singular: FoundSolution[];
   stats: PathStatistics;
+  /** The review of the ends (absent when the solve made no review, e.g. post-processing of merged shards). */
+  retracks?: RetrackSummary;
   seconds: number;
 }

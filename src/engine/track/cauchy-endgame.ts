@@ -14,7 +14,10 @@ const HOPELESS_CONDITION = 1e12;
 export interface EndgameResult {
   status: SegmentStatus;
   winding: number;
-  /** true when the distance to infinity fell steadily like s^w, w > 0 (then x is the last sample, not a limit). */
+  /**
+   * true when the end is at infinity: the distance to infinity fell steadily like s^w, w > 0 (x is then the last
+   * sample), or the loops' limit lies at infinity within its accuracy (x is the limit).
+   */
   diverged: boolean;
 }
 
@@ -22,14 +25,16 @@ export interface EndgameResult {
  * Divergence test (in the spirit of Huber–Verschelde's valuations at infinity, SIAM J. Numer. Anal. 35, 1998):
  * the distance to infinity d is sampled at s_k = r0·ρ^k. A diverging path has d_k ≈ a·ρ^{k·w}, w > 0: the
  * valuation estimates w_k = log(d_k / d_{k−1}) / log ρ are steady and Aitken's Δ² extrapolation of d tends to 0.
- * A finite end has d_k ≈ d* + a·ρ^{k/c}: its w_k shrink by the factor ρ^{1/c} per sample (over three estimates,
- * by more than 16 % for winding numbers c ≤ 16) and Aitken recovers d* > 0. Diverging: d ≤ 0.02 and
- * decreasing, the last three w_k in [1/64, 64] within 10 % of each other, and the extrapolated limit below
- * a quarter of d. A finite end passes only if approached slowly while still far (a very ill-conditioned end,
- * or winding number above 16) with d* ≤ 0.005, coordinates ≥ 200× the chart's scale: the documented blind spot;
- * and before any verdict Newton at the end is tried from the sample (settle).
+ * A finite end has d_k ≈ d* + a·ρ^{k/c}: its w_k shrink toward 0 and Aitken recovers d* > 0 once d_k nears d*.
+ * The verdict needs evidence, never a fixed distance: the last three w_k in [1/64, 64] within 10 % of each other,
+ * the extrapolated limit below a quarter of d, and d fallen by at least DIVERGENCE_DROP since the endgame began
+ * (so a far finite end would have to sit 10⁴ times closer to infinity than where the endgame found the path);
+ * before any verdict Newton at the end is tried from the sample (settle), which keeps every nonsingular end however
+ * far out. Loop estimates (Cauchy) are at infinity when their distance to infinity is within ten times their own
+ * accuracy (the distance between the two agreeing estimates, and no better than finalTolerance: the samples are
+ * corrected to that).
  */
-const DIVERGING_DISTANCE = 0.02;
+const DIVERGENCE_DROP = 1e-4;
 const LIMIT_FRACTION = 0.25;
 const VALUATION_SPREAD = 1.1;
 
@@ -55,11 +60,12 @@ export function createCauchyEndgame(stepper: Stepper, infinityDistance?: (x: Flo
   const dd = new Float64Array(4), cc = new Float64Array(3);
   return (x, endRe, endIm, uRe, uIm, r0) => {
     const s = stepper.settings;
-    let r = r0, havePrevious = false, lastWinding = 0, inZone = false, step = NaN;
+    let r = r0, havePrevious = false, lastWinding = 0, inZone = false, step = NaN, agreement = Infinity;
     let stepStatus: SegmentStatus = 'ok';
     dd.fill(NaN);
     cc.fill(NaN);
     if (infinityDistance) dd[3] = infinityDistance(x);
+    const dStart = dd[3]!;
     result.diverged = false;
     for (let k = 0; k < 2 * s.maxRounds; k++) {
       if (inZone) {
@@ -69,10 +75,10 @@ export function createCauchyEndgame(stepper: Stepper, infinityDistance?: (x: Flo
           break;
         }
         if (winding > 0) {
-          if (havePrevious && winding === lastWinding && distInf(estimate, previous) <= s.endgameTolerance * (1 + normInf(estimate))
+          if (havePrevious && winding === lastWinding && (agreement = distInf(estimate, previous) / (1 + normInf(estimate))) <= s.endgameTolerance
             && stepper.residual(estimate, endRe, endIm) <= ENDPOINT_RESIDUAL) {
             x.set(estimate);
-            return done(winding, false);
+            return done(winding, atInfinity(x, Math.max(agreement, s.finalTolerance)));
           }
           previous.set(estimate);
         }
@@ -87,7 +93,7 @@ export function createCauchyEndgame(stepper: Stepper, infinityDistance?: (x: Flo
         break;
       }
       r = rNext;
-      if (infinityDistance && diverging(infinityDistance(x))) return settle(x) ? done(1, false) : done(1, true);
+      if (infinityDistance && diverging(infinityDistance(x), true)) return settle(x) ? done(1, false) : done(1, true);
       stepper.residual(x, endRe + r * uRe, endIm + r * uIm); // condition estimate at this sample
       if (stepper.condition > HOPELESS_CONDITION) break;
       if (!inZone) {
@@ -102,18 +108,20 @@ export function createCauchyEndgame(stepper: Stepper, infinityDistance?: (x: Flo
     // the last loop estimate (else the last good sample, polished by Newton at the end) is accepted as a singular
     // end when its residual is at most ENDPOINT_RESIDUAL, with the last winding number (0: undetermined).
     // (A nonsingular end has winding number 1 by the implicit function theorem, whatever the loops said.)
+    // The distance to infinity still falling steadily at the last samples is evidence enough of divergence.
+    const fallingAtEnd = infinityDistance !== undefined && steadyDecay(false);
     if (havePrevious && stepper.residual(previous, endRe, endIm) <= ENDPOINT_RESIDUAL) {
       x.set(previous);
-      return done(stepper.condition <= s.singularCondition ? 1 : lastWinding, false);
+      const nonsingular = stepper.condition <= s.singularCondition;
+      return done(nonsingular ? 1 : lastWinding, !nonsingular && fallingAtEnd);
     }
     if (settle(x)) return done(1, false);
     stepper.newton(x, endRe, endIm, s.finalTolerance, 8);
     if (stepper.residual(x, endRe, endIm) <= ENDPOINT_RESIDUAL) {
       if (stepper.condition <= s.singularCondition) return done(1, false);
-      // singular and close to infinity, the distance still falling at the last samples: at infinity
-      const last = infinityDistance ? infinityDistance(x) : Infinity;
-      return done(0, last <= DIVERGING_DISTANCE && dd[3]! < dd[2]! && dd[2]! < dd[1]!);
+      return done(0, fallingAtEnd);
     }
+    if (fallingAtEnd) return done(1, true);
     return fail(stepStatus === 'ok' ? 'no-convergence' : stepStatus);
 
     /**
@@ -129,16 +137,26 @@ export function createCauchyEndgame(stepper: Stepper, infinityDistance?: (x: Flo
       return true;
     }
 
-    /** Records the next distance to infinity and applies the divergence test. */
-    function diverging(next: number): boolean {
+    /** Records the next distance to infinity and applies the divergence test (with the drop since the start). */
+    function diverging(next: number, needDrop: boolean): boolean {
       dd.copyWithin(0, 1);
       dd[3] = next;
+      return steadyDecay(needDrop);
+    }
+
+    /** The last four distances to infinity decay steadily toward 0 (see the divergence test). */
+    function steadyDecay(needDrop: boolean): boolean {
       const logRho = Math.log(s.radiusRatio);
       const w1 = Math.log(dd[1]! / dd[0]!) / logRho, w2 = Math.log(dd[2]! / dd[1]!) / logRho, w3 = Math.log(dd[3]! / dd[2]!) / logRho;
       const lo = Math.min(w1, w2, w3), hi = Math.max(w1, w2, w3);
       const [e0, e1, e2] = [dd[1]!, dd[2]!, dd[3]!];
       const limit = e2 - ((e2 - e1) * (e2 - e1)) / (e2 - 2 * e1 + e0);
-      return e2 <= DIVERGING_DISTANCE && lo >= 1 / 64 && hi <= 64 && hi <= VALUATION_SPREAD * lo && Math.abs(limit) <= LIMIT_FRACTION * e2;
+      return (!needDrop || e2 <= DIVERGENCE_DROP * dStart) && lo >= 1 / 64 && hi <= 64 && hi <= VALUATION_SPREAD * lo && Math.abs(limit) <= LIMIT_FRACTION * e2;
+    }
+
+    /** A limit estimate known to relative accuracy `accuracy` is at infinity when its distance to infinity is within ten times that. */
+    function atInfinity(x: Float64Array, accuracy: number): boolean {
+      return infinityDistance !== undefined && infinityDistance(x) <= 10 * Math.max(accuracy, 2 ** -52);
     }
 
     /** One loop at radius r from x: the winding number (mean in `estimate`, x back at its start), 0 if not closed, −1 on a tracking failure. */

@@ -4,8 +4,12 @@ import { createStepper, type SegmentStatus, type Stepper } from './stepper.ts';
 import { createCauchyEndgame } from './cauchy-endgame.ts';
 import { DEFAULT_TRACKER_SETTINGS, stricterSettings, type TrackerSettings } from './settings.ts';
 
-/** Ends closer than this (relative, in the homotopy's projective coordinates) to infinity are 'at-infinity'. */
-export const INFINITY_TOLERANCE = 1e-8;
+/**
+ * A nonsingular end is at infinity when its distance to infinity (homotopy.infinityDistance) is at most this many
+ * times κ·2⁻⁵², its attainable accuracy after Newton's method (κ the condition estimate there): zero to within
+ * rounding. Any larger distance is a finite end, however large its affine coordinates.
+ */
+export const INFINITY_ACCURACY_FACTOR = 64;
 /** Attempted steps allowed for the straight final approach before the Cauchy endgame takes over. */
 const APPROACH_ATTEMPTS = 40;
 /** Angle (radians) by which a retry turns the endgame's ray into the complex t-plane (common practice, no source). */
@@ -91,8 +95,9 @@ export function createTracker(homotopy: Homotopy, settings: Partial<TrackerSetti
     const condition = Number.isFinite(residual) ? stepper.condition : Infinity;
     let outcome: PathOutcome;
     if (failure !== undefined) outcome = 'failed';
-    else if (diverged || (homotopy.infinityDistance?.(x) ?? Infinity) <= INFINITY_TOLERANCE) outcome = 'at-infinity';
-    else outcome = winding !== 1 || !(condition <= base.singularCondition) ? 'singular' : 'regular';
+    else if (diverged) outcome = 'at-infinity';
+    else if (winding !== 1 || !(condition <= base.singularCondition)) outcome = 'singular';
+    else outcome = (homotopy.infinityDistance?.(x) ?? Infinity) <= INFINITY_ACCURACY_FACTOR * Math.max(1, condition) * 2 ** -52 ? 'at-infinity' : 'regular';
     const end: PathEnd = { outcome, point: x, residual, condition, windingNumber: winding, steps, rejectedSteps, retries };
     return failure === undefined ? end : { ...end, failure };
   }

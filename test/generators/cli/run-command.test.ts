@@ -67,8 +67,12 @@ describe('regenerate', () => {
     expect(worse.stderr.text).toMatch(/refused to write the new record[\s\S]*found 2 < published 4[\s\S]*pass --force/);
     expect(readFileSync(recordPath(w.content, 'two-test-conics'), 'utf8')).toBe(published);
     const forced = fakeContext({ problemsDir: w.problems, engine: () => fakeEngine({ lose: 2, version: 'fake-2' }) });
-    expect(await runCommand(['regenerate', 'two-test-conics', '--force', '--content', w.content], forced.ctx)).toBe(0);
-    expect(JSON.parse(readFileSync(recordPath(w.content, 'two-test-conics'), 'utf8')).history).toHaveLength(2);
+    // forced, the honest record is published, never as complete, and the command still says how many are missing
+    expect(await runCommand(['regenerate', 'two-test-conics', '--force', '--content', w.content], forced.ctx)).toBe(1);
+    expect(forced.stderr.text).toMatch(/two-test-conics: instance "garden-beds": found 2 of 4 \(2 missing\) — published, not as complete/);
+    const record = JSON.parse(readFileSync(recordPath(w.content, 'two-test-conics'), 'utf8'));
+    expect(record.history).toHaveLength(2);
+    expect(record.instances.every((i: { counts: { complete: boolean } }) => !i.counts.complete)).toBe(true);
   });
 });
 
@@ -112,9 +116,10 @@ describe('command-line mistakes and failures', () => {
     expect(debug.stderr.text).toMatch(/\n\s+at /);
   });
 
-  it('prints a text summary with each instance ladder and notes by default', async () => {
-    const { ctx, stdout } = fakeContext({ engine: () => fakeEngine({ lose: 1 }) });
-    expect(await runCommand(['solve', TWO_CONICS], ctx)).toBe(0);
+  it('prints a text summary with each instance ladder and notes by default; a shortfall exits 1 with one line per instance', async () => {
+    const { ctx, stdout, stderr } = fakeContext({ engine: () => fakeEngine({ lose: 1 }) });
+    expect(await runCommand(['solve', TWO_CONICS], ctx)).toBe(1);
+    expect(stderr.text).toMatch(/^two-test-conics: instance "garden-beds": found 3 of 4 \(1 missing\)$/m);
     expect(stdout.text).toMatch(/garden-beds \(demo, seed 5\): Bézout 4 · true 4 · found 3 ·/);
     expect(stdout.text).toMatch(/note: found 3 of 4: 1 path failed/);
   });
