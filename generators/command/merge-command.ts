@@ -10,7 +10,8 @@ import { publish } from '../write/publish.ts';
 import type { CommandContext } from './context.ts';
 import { parseOptions } from './parse-options.ts';
 import { reportPublished } from './report-publish.ts';
-import { jsonSummary, textSummary } from './summary.ts';
+import { EXIT } from './exit-codes.ts';
+import { jsonSummary, shortfallLines, textSummary } from './summary.ts';
 
 const USAGE = 'merge <part.json>… [--json] [--force] [--content DIR]';
 
@@ -29,5 +30,8 @@ export async function mergeCommand(args: readonly string[], ctx: CommandContext)
   const loaded = await loadTarget(parts[0]!.target, ctx.problemsDir);
   const solved = await mergeParts(loaded, await ctx.loadEngine(), parts);
   ctx.stdout.write(values.json ? `${JSON.stringify(jsonSummary(solved.record, solved.seconds))}\n` : textSummary(solved.record, solved.seconds));
-  return reportPublished(ctx, solved.record.slug, publish(contentRoot(values.content), solved.record, { force: Boolean(values.force) }));
+  const published = reportPublished(ctx, solved.record.slug, publish(contentRoot(values.content), solved.record, { force: Boolean(values.force) }));
+  const short = shortfallLines(solved.record);
+  for (const line of short) ctx.stderr.write(`${line} — published, not as complete\n`);
+  return Math.max(published, short.length > 0 ? EXIT.failed : EXIT.ok);
 }

@@ -7,13 +7,16 @@ import { eachProblem } from './each-problem.ts';
 import { integerOption, parseOptions } from './parse-options.ts';
 import { reportPublished } from './report-publish.ts';
 import { solveWithProgress } from './run-solve.ts';
-import { textSummary } from './summary.ts';
+import { EXIT } from './exit-codes.ts';
+import { shortfallLines, textSummary } from './summary.ts';
 
 const USAGE = 'regenerate [<slug | path/to/definition.ts>… | --all] [--force] [--workers N] [--content DIR]';
 
 /**
  * `regenerate`: solves the named problems (or all of the registry) and writes their records and pages, refusing
- * to replace a better published record unless --force. Goes on past a failing problem; exits with the worst code.
+ * to replace a better published record unless --force. A record that found fewer solutions than the published count
+ * is published honestly (never marked complete: its counts say found < true count, its notes say why) and the
+ * command says how many are missing and exits 1. Goes on past a failing problem; exits with the worst code.
  */
 export async function regenerateCommand(args: readonly string[], ctx: CommandContext): Promise<number> {
   const { values, positionals } = parseOptions(args, { all: { type: 'boolean' }, force: { type: 'boolean' }, workers: { type: 'string' } }, USAGE);
@@ -26,6 +29,9 @@ export async function regenerateCommand(args: readonly string[], ctx: CommandCon
     const loaded = await loadTarget(target, ctx.problemsDir);
     const solved = await solveWithProgress(ctx, engine, loaded, { workers });
     ctx.stdout.write(textSummary(solved.record, solved.seconds));
-    return reportPublished(ctx, loaded.definition.slug, publish(root, solved.record, { force: Boolean(values.force) }));
+    const published = reportPublished(ctx, loaded.definition.slug, publish(root, solved.record, { force: Boolean(values.force) }));
+    const short = shortfallLines(solved.record);
+    for (const line of short) ctx.stderr.write(`${line} — published, not as complete\n`);
+    return Math.max(published, short.length > 0 ? EXIT.failed : EXIT.ok);
   });
 }

@@ -11,14 +11,16 @@ import { integerOption, parseOptions, shardOption } from './parse-options.ts';
 import { publish } from '../write/publish.ts';
 import { reportPublished } from './report-publish.ts';
 import { solveWithProgress } from './run-solve.ts';
-import { jsonSummary, textSummary } from './summary.ts';
+import { jsonSummary, shortfallLines, textSummary } from './summary.ts';
 
 const USAGE = 'solve <slug | path/to/definition.ts> [--json] [--seed N] [--workers N] [--write [--force]] [--shard k/n --out part.json] [--content DIR]';
 
 /**
  * `solve`: solves one problem (registry slug or definition file) and prints a summary; --json prints exactly one
- * JSON object on stdout (the first demo instance). Writes content only with --write (through the regression
- * guard); with --shard k/n --out FILE it solves batch k of n and writes a part file for `merge` instead.
+ * JSON object on stdout (the first demo instance). Exits 1 with one line on stderr per instance that found fewer
+ * solutions than the published count. Writes content only with --write (through the regression guard; such a
+ * record is published, never marked complete); with --shard k/n --out FILE it solves batch k of n and writes a
+ * part file for `merge` instead.
  */
 export async function solveCommand(args: readonly string[], ctx: CommandContext): Promise<number> {
   const { values, positionals } = parseOptions(args, {
@@ -42,7 +44,10 @@ export async function solveCommand(args: readonly string[], ctx: CommandContext)
   const solved = await solveWithProgress(ctx, engine, loaded, { seed, workers });
   if (values.json) ctx.stdout.write(`${JSON.stringify(jsonSummary(solved.record, solved.seconds))}\n`);
   else ctx.stdout.write(textSummary(solved.record, solved.seconds));
-  if (!values.write) return EXIT.ok;
+  const short = shortfallLines(solved.record);
+  for (const line of short) ctx.stderr.write(`${line}\n`);
+  const solveCode = short.length > 0 ? EXIT.failed : EXIT.ok;
+  if (!values.write) return solveCode;
   const outcome = publish(contentRoot(values.content), solved.record, { force: Boolean(values.force) });
-  return reportPublished(ctx, solved.record.slug, outcome);
+  return Math.max(solveCode, reportPublished(ctx, solved.record.slug, outcome));
 }

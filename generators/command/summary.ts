@@ -22,9 +22,19 @@ export function jsonSummary(record: SolveRecord, seconds: readonly number[]) {
     certified: c.certified,
     real: c.real,
     certifiedReal: c.certifiedReal,
-    paths: { tracked: p.tracked, nonsingular: p.nonsingular, singular: p.singular, atInfinity: p.atInfinity, failed: p.failed },
+    paths: { tracked: p.tracked, nonsingular: p.nonsingular, singular: p.singular, atInfinity: p.atInfinity, excess: p.excess, failed: p.failed },
     seconds: roundSignificant(seconds[k] ?? 0, 3),
   };
+}
+
+/**
+ * One line per instance that found fewer solutions than the published count (`<slug>: instance "generic": found
+ * 3261 of 3264 (3 missing)`); empty when every instance reached it or no count is published.
+ */
+export function shortfallLines(record: SolveRecord): string[] {
+  return record.instances
+    .filter((i) => i.counts.trueCount !== null && i.counts.found < i.counts.trueCount)
+    .map((i) => `${record.slug}: instance "${i.id}": found ${i.counts.found} of ${i.counts.trueCount} (${i.counts.trueCount! - i.counts.found} missing)`);
 }
 
 /** Human-readable lines: the problem, then per instance its count ladder, paths, seconds and notes. */
@@ -45,7 +55,7 @@ function instanceLine(i: InstanceResult): string {
     `found ${c.found}`,
     `certified ${c.certified} (${c.certifiedDistinct} distinct)`,
     `real ${c.real} (${c.certifiedReal} certified)`,
-    `paths ${p.tracked}: ${p.nonsingular} nonsingular, ${p.singular} singular, ${p.atInfinity} at infinity, ${p.failed} failed`,
+    `paths ${p.tracked}: ${p.nonsingular} nonsingular, ${p.singular} singular, ${p.excess} excess, ${p.atInfinity} at infinity, ${p.failed} failed`,
     c.complete ? 'complete' : '',
   ].filter(Boolean).join(' · ');
 }

@@ -62,8 +62,9 @@ export async function assembleInstance(run: InstanceRun, engine: EngineServices)
   };
   const st = report.stats;
   const paths: PathStats = {
-    tracked: st.tracked, nonsingular: st.regular, singular: st.singular, atInfinity: st.atInfinity, failed: st.failed,
+    tracked: st.tracked, nonsingular: st.regular, singular: st.singular, excess: st.excess, atInfinity: st.atInfinity, failed: st.failed,
     failures: { ...st.failures }, stepsMedian: st.stepsMedian, stepsMax: st.stepsMax, retries: st.retries,
+    ...(report.retracks ? { retracks: { ...report.retracks } } : {}),
   };
   const roundedParameters = roundNumbers(parameters);
   const realSolutions = rounded.flatMap((s, index) => (s.real ? [{ index, values: s.values.map(([re]) => re) }] : []));

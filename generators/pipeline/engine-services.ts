@@ -1,6 +1,7 @@
 import type { PathEnd } from '../../src/engine/homotopy.ts';
 import type { PolynomialSystem } from '../../src/engine/expr/node.ts';
 import type { ProblemDefinition } from '../../src/atlas/definition.ts';
+import type { RetrackStats } from '../../src/atlas/record.ts';
 
 /** One distinct solution the engine reports (H1's FoundSolution): packed complex point in the unknowns. */
 export interface EngineSolution {
@@ -32,6 +33,7 @@ export interface EngineReport {
     readonly tracked: number;
     readonly regular: number;
     readonly singular: number;
+    readonly excess: number;
     readonly atInfinity: number;
     readonly failed: number;
     readonly failures: Readonly<Record<string, number>>;
@@ -39,6 +41,8 @@ export interface EngineReport {
     readonly stepsMax: number;
     readonly retries: number;
   };
+  /** What the review of the ends did (total-degree and multihomogeneous solves; see src/engine/solve/types.ts). */
+  readonly retracks?: RetrackStats;
   readonly seconds: number;
 }
 
@@ -82,8 +86,8 @@ export interface EngineServices {
   readonly strategies: Readonly<Record<string, SolveStrategy>>;
   /** Certifies the points; `workers` (≥ 2) may spread the work over threads, with the same verdict as one thread. */
   readonly certify: (system: PolynomialSystem, parameters: Float64Array, points: Float64Array[], options: { realParameters: boolean; workers?: number }) => Promise<CertifyReport> | CertifyReport;
-  /** Post-processing of path ends (from concatenated shards, in path order) into a report, as a single run does. */
-  readonly collect: (system: PolynomialSystem, parameters: Float64Array, ends: readonly PathEnd[], bounds: SolveBounds) => Promise<EngineReport> | EngineReport;
+  /** The last step of a sharded solve: the ends of every shard, in path order, into the report a single run gives (seed: the instance's). */
+  readonly collect: (system: PolynomialSystem, parameters: Float64Array, ends: readonly PathEnd[], bounds: SolveBounds, seed: number) => Promise<EngineReport> | EngineReport;
   /** Ends any worker threads the engine started (the CLI calls it once a command is done); absent when there are none. */
   readonly close?: () => Promise<void>;
 }

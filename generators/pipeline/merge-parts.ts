@@ -34,7 +34,7 @@ export async function mergeParts(loaded: LoadedDefinition, engine: EngineService
     const parameters = instanceParameters(loaded, instance);
     const where = `merge: instance "${instance.id}"`;
     const bounds = { bezoutBound: head.bezoutBound, multihomogeneousBound: head.multihomogeneousBound, startSystem: head.startSystem };
-    const report = await runEngine(where, async () => engine.collect(loaded.system, parameters, ends, bounds));
+    const report = await runEngine(where, async () => engine.collect(loaded.system, parameters, ends, bounds, head.seed));
     const run = { definition: loaded.definition, system: loaded.system, instance, seed: head.seed, method: strategy.label, parameters, report, where };
     const done = await runEngine(where, () => assembleInstance(run, engine));
     results.push(done.result);

@@ -4,7 +4,7 @@ import { z } from 'astro/zod';
 const looseNumber = z.number().nullable().transform((v) => v ?? Infinity);
 
 const endSchema = z.object({
-  outcome: z.enum(['regular', 'singular', 'at-infinity', 'failed']),
+  outcome: z.enum(['regular', 'singular', 'excess', 'at-infinity', 'failed']),
   point: z.array(looseNumber),
   residual: looseNumber,
   condition: looseNumber,
@@ -13,6 +13,8 @@ const endSchema = z.object({
   rejectedSteps: z.number(),
   retries: z.number(),
   failure: z.enum(['step-underflow', 'step-budget', 'no-convergence', 'non-finite']).optional(),
+  direction: z.literal(true).optional(),
+  retrack: z.object({ reason: z.enum(['jump', 'failed', 'undecided']), precision: z.enum(['double', 'double-double']), changed: z.boolean() }).optional(),
 });
 
 /**
@@ -21,7 +23,7 @@ const endSchema = z.object({
  */
 export const partSchema = z.object({
   format: z.literal('atlas-solve-part'),
-  formatVersion: z.literal(1),
+  formatVersion: z.literal(2),
   target: z.string().min(1),
   slug: z.string(),
   definitionHash: z.string(),

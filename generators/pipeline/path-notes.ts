@@ -16,7 +16,11 @@ export function pathNotes(counts: Counts, paths: PathStats, kind: 'generic' | 'd
     notes.push(`found ${counts.found}, more than the published count ${counts.trueCount}: some solutions may be duplicates or spurious`);
   }
   if (paths.atInfinity > 0) notes.push(`${plural(paths.atInfinity, 'path')} went to infinity`);
-  if (paths.singular > 0) notes.push(`${plural(paths.singular, 'path')} ended at singular points (not counted as found)`);
+  if (paths.excess > 0) notes.push(`${plural(paths.excess, 'path')} ended on a positive-dimensional solution set (the naive count's excess)`);
+  if (paths.singular > 0) notes.push(`${plural(paths.singular, 'path')} ended at isolated singular points (not counted as found)`);
+  const r = paths.retracks;
+  if (r && r.jumpPaths > 0) notes.push(`${plural(r.jumpPaths, 'path')} re-tracked after a path jump (${r.recoveredJumps} recovered${r.unresolvedJumps > 0 ? `, ${r.unresolvedJumps} still shared` : ''})`);
+  if (r && r.extendedPaths > 0) notes.push(`${plural(r.extendedPaths, 'path')} re-tracked in double-double precision (${r.extendedDecided} decided)`);
   if (paths.retries > 0) notes.push(`${plural(paths.retries, "re-track")} with stricter settings`);
   if (counts.certified < counts.found) notes.push(`${counts.found - counts.certified} of ${counts.found} solutions not certified`);
   return notes;

@@ -10,7 +10,7 @@ import { AtlasError } from './atlas-error.ts';
  * To add a strategy (monodromy, say), add one entry to `strategies` below.
  */
 export async function loadEngine(): Promise<EngineServices> {
-  const [{ solveSystem, collectSolutions }, { certifySolutions }, { certifySolutionsParallel, closeCertifyWorkers }, { ENGINE_VERSION }, { solveByParameterHomotopy }, { createPoolLegTracker }, { sharedPool, closeSharedPool }] = await Promise.all([
+  const [{ solveSystem, finishSolve }, { certifySolutions }, { certifySolutionsParallel, closeCertifyWorkers }, { ENGINE_VERSION }, { solveByParameterHomotopy }, { createPoolLegTracker }, { sharedPool, closeSharedPool }] = await Promise.all([
     import('../../src/engine/solve/solve-system.ts'),
     import('../../src/engine/certify/certify-solutions.ts'),
     import('../../src/engine/certify/certify-parallel.ts'),
@@ -50,7 +50,7 @@ export async function loadEngine(): Promise<EngineServices> {
     strategies,
     certify: (system, parameters, points, { workers, ...options }) =>
       workers ? certifySolutionsParallel(system, parameters, points, { ...options, workers }) : certifySolutions(system, parameters, points, options),
-    collect: (system, parameters, ends, bounds) => collectSolutions(system, parameters, ends, { ...bounds }),
+    collect: (system, parameters, ends, bounds, seed) => finishSolve(system, parameters, ends, { ...bounds }, seed),
     close: async () => { await Promise.all([closeSharedPool(), closeCertifyWorkers()]); },
   };
 }

@@ -19,7 +19,7 @@ export async function solveShard(loaded: LoadedDefinition, target: string, engin
     const ends = report.ends.map((e) => ({ ...e, point: Array.from(e.point, finiteOrNull), residual: finiteOrNull(e.residual), condition: finiteOrNull(e.condition) }));
     instances.push({ id: instance.id, seed: instance.seed, bezoutBound: report.bezoutBound, multihomogeneousBound: report.multihomogeneousBound ?? null, startSystem: report.startSystem === 'multihomogeneous' ? 'multihomogeneous' : 'total-degree', ends });
   }
-  return { format: 'atlas-solve-part', formatVersion: 1, target, slug: loaded.definition.slug, definitionHash: loaded.hash, engineVersion: engine.version, shard, instances };
+  return { format: 'atlas-solve-part', formatVersion: 2, target, slug: loaded.definition.slug, definitionHash: loaded.hash, engineVersion: engine.version, shard, instances };
 }
 
 function finiteOrNull(x: number): number | null {
