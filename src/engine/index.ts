@@ -4,6 +4,7 @@ export type { Homotopy, LinearSolver, PathEnd, PathOutcome, FailureReason } from
 export { ENGINE_VERSION } from './version.ts';
 export { createRandom, type RandomSource } from './random.ts';
 export { compileSystem, compiledFromSource, type CompiledEquations, type SystemShape, type SystemEvaluator } from './compile/compile-system.ts';
+export { compileValuesInDoubleDouble, doubleDoubleValuesFromSource, type DoubleDoubleValues, type DoubleDoubleValuesEvaluator, type ValuesProgram } from './dd/compile-values.ts';
 export { createDenseLU, type DenseSolver } from './linalg/dense-lu.ts';
 export { createTracker, INFINITY_ACCURACY_FACTOR, type Tracker } from './track/tracker.ts';
 export { DEFAULT_TRACKER_SETTINGS, stricterSettings, type TrackerSettings } from './track/settings.ts';

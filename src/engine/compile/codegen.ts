@@ -30,8 +30,8 @@ export function generateSource(ins: readonly TapeInstruction[], out: ProgramOutp
   mark(out.jx, 1);
   mark(out.jp, 2);
   const isRealConst = (id: number): boolean => ins[id]!.op === 'const' && ins[id]!.im === 0;
-  const re = (id: number): string => (ins[id]!.op === 'const' ? num(ins[id]!.re) : `r${id}`);
-  const im = (id: number): string => (ins[id]!.op === 'const' ? num(ins[id]!.im) : `i${id}`);
+  const re = (id: number): string => (ins[id]!.op === 'const' ? numberLiteral(ins[id]!.re) : `r${id}`);
+  const im = (id: number): string => (ins[id]!.op === 'const' ? numberLiteral(ins[id]!.im) : `i${id}`);
   const line = (id: number): string => {
     const { op, a, b } = ins[id]!;
     switch (op) {
@@ -66,8 +66,8 @@ export function generateSource(ins: readonly TapeInstruction[], out: ProgramOutp
   return body.join('\n');
 }
 
-/** A number literal that evaluates to exactly the same double (negative values parenthesised for `- -x`). */
-function num(value: number): string {
+/** A number literal that evaluates to exactly the same double (negative values parenthesised for `- -x`; −0 prints as 0). */
+export function numberLiteral(value: number): string {
   const s = Object.is(value, -0) ? '0' : String(value);
   return value < 0 ? `(${s})` : s;
 }

@@ -3,6 +3,7 @@ import { createTape, type TapeInstruction } from './tape.ts';
 import { lowerExpression } from './lower.ts';
 import { gradient } from './differentiate.ts';
 import { generateSource, type ProgramOutputs } from './codegen.ts';
+import { createFunctionCache } from './function-cache.ts';
 
 /**
  * The sizes of a compiled system: neq equations, n unknowns, np parameters, and the parameters whose derivative
@@ -71,8 +72,7 @@ export function compileSystem(system: PolynomialSystem, options: { derivativePar
   return { ...compiledFromSource(source, shape), program: { instructions: tape.instructions, outputs } };
 }
 
-const evaluators = new Map<string, SystemEvaluator>();
-const EVALUATOR_CACHE_SIZE = 32;
+const evaluatorFor = createFunctionCache<SystemEvaluator>(32);
 
 /**
  * Rebuilds a compiled system from its source text (as sent to a worker) and shape; no program attached.
@@ -80,11 +80,5 @@ const EVALUATOR_CACHE_SIZE = 32;
  * optimised code across solves and instances (the source carries no parameter values).
  */
 export function compiledFromSource(source: string, shape: SystemShape): CompiledEquations {
-  let evaluate = evaluators.get(source);
-  if (evaluate === undefined) {
-    evaluate = new Function(source)() as SystemEvaluator;
-    if (evaluators.size >= EVALUATOR_CACHE_SIZE) evaluators.delete(evaluators.keys().next().value!);
-    evaluators.set(source, evaluate);
-  }
-  return { ...shape, evaluate, source };
+  return { ...shape, evaluate: evaluatorFor(source), source };
 }

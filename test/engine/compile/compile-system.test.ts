@@ -1,7 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import Complex from 'complex.js';
-import type { ExprNode, PolynomialSystem } from '../../../src/engine/expr/node.ts';
-import { add, constant, det, mul, neg, param, pow, sub, unknown } from '../../../src/engine/expr/build.ts';
+import type { ExprNode } from '../../../src/engine/expr/node.ts';
+import { add, constant, mul, pow } from '../../../src/engine/expr/build.ts';
+import { a, sampleSystem, shared, x0, x1, x2 } from './sample-system.ts';
 import { compileSystem, compiledFromSource } from '../../../src/engine/compile/compile-system.ts';
 import { createRandom } from '../../../src/engine/random.ts';
 
@@ -23,18 +24,7 @@ function direct(node: ExprNode, x: Float64Array, p: Float64Array): Complex {
   }
 }
 
-const x0 = unknown('x', 0), x1 = unknown('y', 1), x2 = unknown('z', 2);
-const a = param('a', 0), b = param('b', 1);
-const shared = add(mul(a, x0, x1), pow(x2, 3), constant(0.5, -2));
-const system: PolynomialSystem = {
-  unknowns: ['x', 'y', 'z'],
-  parameters: ['a', 'b'],
-  equations: [
-    sub(mul(shared, shared), mul(b, x0)),
-    add(pow(sub(x0, x1), 5), neg(mul(b, b, x2)), det([[x0, x1, 1], [a, x2, b], [1, 2, x0]])),
-    add(mul(constant(0, 1), shared, x1), pow(x0, 0), mul(3, a)),
-  ],
-};
+const system = sampleSystem;
 
 const point = (seed: number, n: number): Float64Array => {
   const r = createRandom(seed);
