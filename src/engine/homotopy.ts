@@ -13,6 +13,12 @@ export interface Homotopy {
   evaluate(x: Float64Array, tRe: number, tIm: number, h: Float64Array, jac: Float64Array, ht: Float64Array): void;
   /** Fills h = H(x, t) only; optional fast path for residual checks. Allocates nothing. */
   evaluateValue?(x: Float64Array, tRe: number, tIm: number, h: Float64Array): void;
+  /**
+   * Optional: fills h = H(x, t) evaluated in double-double arithmetic (about 32 digits; x and t taken as exact
+   * doubles), rounded to double. With it the tracker can run in extended precision (TrackerSettings.precision):
+   * Newton's corrections then see the residual's true value rather than its rounding noise. Allocates nothing.
+   */
+  evaluateValueExtended?(x: Float64Array, tRe: number, tIm: number, h: Float64Array): void;
   /** A linear solver fitted to this homotopy's Jacobian structure (block elimination, say); dense LU if absent. */
   createSolver?(): LinearSolver;
   /**
@@ -21,6 +27,10 @@ export interface Homotopy {
    * Lets the tracker report 'at-infinity' (distance ≤ 1e-8, or a steady positive valuation in the endgame).
    */
   infinityDistance?(x: Float64Array): number;
+  /** Optional, with groupInfinityDistance: how many projective groups the coordinates form. */
+  readonly infinityGroups?: number;
+  /** Optional: the relative distance to infinity in group g alone (infinityDistance is the minimum over the groups). */
+  groupInfinityDistance?(x: Float64Array, group: number): number;
 }
 
 /** Factor-then-solve for one n×n complex matrix at a time; buffers are owned by the solver and reused. */

@@ -1,14 +1,17 @@
 import type { Homotopy } from '../homotopy.ts';
 import type { CompiledEquations } from '../compile/compile-system.ts';
+import type { DoubleDoubleValuesEvaluator } from '../dd/compile-values.ts';
 import { matVec } from '../complex/packed.ts';
 
 /**
  * The coefficient-parameter homotopy H(x, t) = F(x; p(t)) of Morgan–Sommese (Appl. Math. Comput. 29, 1989)
  * on the straight segment p(t) = (1 − τ)·p0 + τ·p1. Without gamma τ = t; with gamma (packed [re, im]) the
  * gamma trick τ(t) = γt / (1 + (γ − 1)t), which keeps τ off the real segment for 0 < t < 1 while τ(0) = 0,
- * τ(1) = 1. ∂H/∂t = J_p·(p1 − p0)·dτ/dt. The compiled system must be square (neq = n). Buffers are made once.
+ * τ(1) = 1. ∂H/∂t = J_p·(p1 − p0)·dτ/dt. The compiled system must be square (neq = n). Buffers are made once. With
+ * `extended` (the double-double value evaluator of the same program) it also offers evaluateValueExtended, with
+ * p(t) as computed in double taken as exact.
  */
-export function parameterHomotopy(compiled: CompiledEquations, p0: Float64Array, p1: Float64Array, gamma?: Float64Array): Homotopy {
+export function parameterHomotopy(compiled: CompiledEquations, p0: Float64Array, p1: Float64Array, gamma?: Float64Array, extended?: DoubleDoubleValuesEvaluator): Homotopy {
   const { n, np, neq } = compiled;
   if (neq !== n) throw new RangeError(`parameter homotopy needs a square system, got ${neq} equations in ${n} unknowns`);
   if (p0.length !== 2 * np || p1.length !== 2 * np) throw new RangeError(`parameter vectors must have length ${2 * np} (packed complex)`);
@@ -39,7 +42,8 @@ export function parameterHomotopy(compiled: CompiledEquations, p0: Float64Array,
       p[k + 1] = p0[k + 1]! + a * dp[k + 1]! + b * dp[k]!;
     }
   };
-  return {
+  const zeros = new Float64Array(2 * n);
+  const homotopy: Homotopy = {
     n,
     evaluate(x, tRe, tIm, h, jac, ht) {
       setParameters(tRe, tIm);
@@ -57,4 +61,11 @@ export function parameterHomotopy(compiled: CompiledEquations, p0: Float64Array,
       compiled.evaluate(x, p, h, null, null);
     },
   };
+  if (extended) {
+    homotopy.evaluateValueExtended = (x, tRe, tIm, h) => {
+      setParameters(tRe, tIm);
+      extended(x, zeros, p, h, null);
+    };
+  }
+  return homotopy;
 }

@@ -25,7 +25,9 @@ const NEWTON_MOVE = 1e-6;
  * large, and it is kept 'regular' only if it solves the target: Newton (relative 1e-13 in natural units, ≤ 5 iterations) moves
  * it ≤ 1e-6 to a backward error ≤ SOLVED_BACKWARD_ERROR with κ ≤ 1e14; else it is 'failed' ('no-convergence'), for
  * the solver to re-track. A 'singular' finite end with backward error ≤ SOLVED_BACKWARD_ERROR and κ ≤ 1e6 is re-judged
- * 'regular' (the projective chart was badly scaled there). 'at-infinity' ends (and ends with some h_g = 0) carry the
+ * 'regular' (the projective chart was badly scaled there). (A singular end's backward error says little: at a double
+ * root the attainable accuracy is 2⁻²⁶, where x² has backward error near 1; undecided singular ends are re-tracked by
+ * the solver's review instead.) 'at-infinity' ends (and ends with some h_g = 0) carry the
  * direction (Y_0 … Y_{n−1}) / max_j |Y_j| in natural units. Residuals of finite ends are backward errors.
  */
 export function toAffineEnd(end: PathEnd, groups: readonly (readonly number[])[], scaling: SystemScaling, tools: AffineTools): PathEnd {

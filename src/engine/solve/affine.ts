@@ -10,10 +10,12 @@ import { noScaling, type SystemScaling } from '../start/scaling.ts';
  */
 export interface AffineTools {
   /**
-   * The normwise backward error in natural units, η(x) = max_i |f_i(x)| / |f_i|(2^c·s) with s = max(1, ‖y‖∞): each
-   * equation's value against the sum of its terms' moduli on the ball of radius s in natural units (see
-   * compile/magnitude.ts; for a polynomial, Σ_α |c_α|·(2^c s)^α). Scale-free (unchanged by rescaling unknowns or
-   * equations), 0 at exact solutions, about 2⁻⁵² times the graph's depth at rounded ones.
+   * The backward error η(x) = max_i |f_i(x)| / |f_i|(ξ): each equation's value against the sum of its terms' moduli
+   * (see compile/magnitude.ts; for a polynomial, Σ_α |c_α|·ξ^α) at ξ_j = max(|x_j|, 2⁻²⁶·2^c_j·s), s = max(1, ‖y‖∞)
+   * in natural units: the componentwise backward error, with coordinates below half the digits of the point's size
+   * counted at that size (a coordinate that is zero at a solution is computed as rounding noise). Scale-free
+   * (unchanged by rescaling unknowns or equations), 0 at exact solutions, about 2⁻⁵² times the graph's depth at
+   * rounded ones, and near 1/s at points near infinity that only the highest-degree terms nearly solve.
    */
   residual(x: Float64Array): number;
   /** κ₁ estimate of the Jacobian in natural units, diag(2^r)·∂F/∂x·diag(2^c) (Infinity when singular or not finite). */
@@ -27,21 +29,24 @@ export interface AffineTools {
   newton(x: Float64Array, tol: number, maxIterations: number): boolean;
 }
 
+/** Coordinates below this fraction of the point's size (natural units) count at that size in the backward error (√(2⁻⁵²)). */
+const NOISE_FLOOR = 2 ** -26;
+
 /** Creates AffineTools for F(·; parameters) in the given natural units (default: none). */
 export function createAffineTools(compiled: CompiledEquations, parameters: Float64Array, scaling: SystemScaling = noScaling(compiled.n, compiled.neq)): AffineTools {
   const { n, neq } = compiled;
   const units = Float64Array.from(scaling.variables, (c) => 2 ** c);
   const rows = Float64Array.from(scaling.equations, (r) => 2 ** r);
   const magnitudes = compiled.program ? compileMagnitudes(compiled) : null;
-  const v = new Float64Array(2 * neq), m = new Float64Array(neq), ball = new Float64Array(2 * n), jac = new Float64Array(2 * neq * n), dx = new Float64Array(2 * n), best = new Float64Array(2 * n);
+  const v = new Float64Array(2 * neq), m = new Float64Array(neq), floored = new Float64Array(2 * n), jac = new Float64Array(2 * neq * n), dx = new Float64Array(2 * n), best = new Float64Array(2 * n);
   const lu = createDenseLU(n);
   const residual = (x: Float64Array): number => {
     compiled.evaluate(x, parameters, v, null, null);
     if (!magnitudes) return relativeSize(v, x, units);
     let radius = 1;
     for (let j = 0; j < n; j++) radius = Math.max(radius, Math.hypot(x[2 * j]!, x[2 * j + 1]!) / units[j]!);
-    for (let j = 0; j < n; j++) ball[2 * j] = units[j]! * radius;
-    magnitudes(ball, parameters, m);
+    for (let j = 0; j < n; j++) floored[2 * j] = Math.max(Math.hypot(x[2 * j]!, x[2 * j + 1]!), NOISE_FLOOR * units[j]! * radius);
+    magnitudes(floored, parameters, m);
     let eta = 0;
     for (let i = 0; i < neq; i++) {
       const f = Math.hypot(v[2 * i]!, v[2 * i + 1]!);

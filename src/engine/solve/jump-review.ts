@@ -5,21 +5,23 @@ import type { RetrackMode } from './review-ends.ts';
 
 /** Two regular ends closer than this (relative, natural units) are the same point. */
 const SAME_POINT = 1e-8;
-/** Strict re-tracks tried on the members of a coincidence before the double-double one (attempts 1 and 2). */
-const STRICT_ATTEMPTS = 2;
+/**
+ * The re-tracks tried in turn on the members of a coincidence: stricterSettings attempts 1 and 2 in double, then 3
+ * and 5 with double-double residuals (measured: bitangent instance 1014's path 123 separates only at attempt 5 in
+ * double-double; 5 in double still jumps).
+ */
+const ROUNDS: readonly RetrackMode[] = [{ kind: 'strict', attempt: 1 }, { kind: 'strict', attempt: 2 }, { kind: 'extended', attempt: 3 }, { kind: 'extended', attempt: 5 }];
 
 /**
  * Path-jump recovery (every solve). A nonsingular isolated solution is the end of exactly one path of a generic
  * homotopy, so regular ends that coincide (relative 1e-8 in natural units) mean that a path jumped onto another.
- * Every member of such a coincidence is re-tracked — strictly in double precision (attempts 1 and 2), then in
- * double-double precision when available — until the ends separate; after each round the coincidences are found
+ * Every member of such a coincidence is re-tracked (ROUNDS: stricter steps in double, then in double-double when
+ * available) until the ends separate; after each round the coincidences are found
  * again over all ends. `review` re-judges a re-tracked end as the per-path review does. Replaces ends in place, each
  * re-tracked end recording the re-track (PathEnd.retrack, reason 'jump', changed when it left the shared point).
  */
 export function recoverJumps(ends: PathEnd[], scaling: SystemScaling, retrack: (path: number, mode: RetrackMode) => PathEnd, review: (end: PathEnd, path: number) => PathEnd, extended: boolean): void {
-  const modes: RetrackMode[] = [];
-  for (let a = 1; a <= STRICT_ATTEMPTS; a++) modes.push({ kind: 'strict', attempt: a });
-  if (extended) modes.push({ kind: 'extended' });
+  const modes = ROUNDS.filter((m) => extended || m.kind === 'strict');
   const shared = new Map<number, Float64Array>();
   let suspects = coinciding(ends, scaling);
   for (const mode of modes) {

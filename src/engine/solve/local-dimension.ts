@@ -9,13 +9,16 @@ export type LocalDimension = 'positive' | 'isolated' | 'undecided';
 
 /** Relative offset (natural units) of the nearby samples from the point. */
 const OFFSET = 1e-3;
-/** Damped Gauss–Newton iterations per sample. */
-const ITERATIONS = 80;
+/** Damped Gauss–Newton iterations per sample (at most; a sample stops when its step is below 2⁻⁵² relative). */
+const ITERATIONS = 200;
 /**
- * A sample that settled on F = 0 has backward error at most this (on a non-reduced set Gauss–Newton converges only
- * linearly, leaving 1e-13 to 1e-10 after its iterations; a stop away from F = 0 leaves 1e-4 and more)…
+ * A sample that settled on F = 0 has backward error at most this, and at most NEAR_INFINITY_MARGIN / (1 + ‖y‖∞) in
+ * natural units: on a set, however non-reduced, Gauss–Newton gets to 1e-16 – 1e-11 within its iterations; a stop
+ * away from F = 0 leaves 1e-4 and more, and a stop near infinity, where only the highest-degree terms nearly cancel,
+ * leaves about 1/‖y‖ — the margin keeps samples a million times below that…
  */
 const ON_SOLUTION_SET = 1e-9;
+const NEAR_INFINITY_MARGIN = 1e-6;
 /**
  * …and its last step at most this fraction of its distance from the point: it stopped there. Creeping back toward an
  * isolated point of multiplicity μ, Gauss–Newton's steps are about 1/μ of the remaining distance.
@@ -32,9 +35,9 @@ const RIDGE = 1e-14;
  * A numerical local-dimension test by nearby samples, for a point x* where F is numerically singular. From
  * x* + 10⁻³·(1 + ‖y*‖)·w (w a random complex unit direction in natural units), damped Gauss–Newton (Levenberg,
  * Quart. Appl. Math. 2, 1944; Marquardt, SIAM J. Appl. Math. 11, 1963: Δ = −(JᴴJ + μI)⁻¹JᴴF in natural units,
- * μ = 10⁻¹⁴·max diag JᴴJ) runs ≤ 80 iterations. Near an isolated point, however singular, the only zero in reach is
+ * μ = 10⁻¹⁴·max diag JᴴJ) runs ≤ 200 iterations. Near an isolated point, however singular, the only zero in reach is
  * x* itself and the iterates creep back to it; near a positive-dimensional set (reduced or not) they settle on the
- * set at a distance comparable to the offset. 'positive' when some sample (of two) settled — backward error ≤ 1e-9
+ * set at a distance comparable to the offset. 'positive' when some sample (of two) settled — backward error ≤ min(1e-9, 1e-6/(1 + ‖y‖))
  * and last step ≤ 10⁻³ of its distance from x* — more than a tenth of the offset away from x*; 'isolated' when both came back
  * within 10⁻³ of the offset; 'undecided' otherwise. Deterministic for a seed. Buffers are made once per test.
  */
@@ -111,11 +114,12 @@ export function createLocalDimensionTest(compiled: CompiledEquations, parameters
       let last = NaN;
       for (let it = 0; it < ITERATIONS; it++) {
         last = step();
-        if (!(last === last) || last <= 1e-16) break;
+        if (!(last === last) || last <= 2 ** -52) break;
       }
       if (!(last === last)) continue;
       const distance = tools.distance(z, x) * (1 + scale); // back to offset units (‖Δy‖∞)
-      if (tools.residual(z) <= ON_SOLUTION_SET && last <= (SETTLED_STEP * distance) / (1 + scale) && distance > FAR * offset) return 'positive';
+      const onSet = Math.min(ON_SOLUTION_SET, NEAR_INFINITY_MARGIN / (1 + scale));
+      if (tools.residual(z) <= onSet && last <= (SETTLED_STEP * distance) / (1 + scale) && distance > FAR * offset) return 'positive';
       if (distance <= BACK * offset) back++;
     }
     return back === 2 ? 'isolated' : 'undecided';

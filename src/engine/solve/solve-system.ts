@@ -2,7 +2,7 @@ import type { PolynomialSystem } from '../expr/node.ts';
 import type { PathEnd } from '../homotopy.ts';
 import { compiledTarget } from './compiled-target.ts';
 import { bezoutBound, multihomogeneousBound } from '../start/bounds.ts';
-import { planHomotopy, type HomotopyPlan } from '../start/plan.ts';
+import { planHomotopy, TRACK_FROM, TRACK_TO, type HomotopyPlan } from '../start/plan.ts';
 import { COMPILED_HOMOTOPY_MODULE, createHomotopy } from '../homotopies/compiled-module.ts';
 import { trackStarts } from '../pool/track-batch.ts';
 import { createTracker } from '../track/tracker.ts';
@@ -11,6 +11,7 @@ import type { PathJob } from '../pool/job.ts';
 import { createAffineTools, type AffineTools } from './affine.ts';
 import { createLocalDimensionTest } from './local-dimension.ts';
 import { createRetracker } from './retracker.ts';
+import { createExtendedNewton } from './extended-newton.ts';
 import { reviewEnd, type PathReviewTools } from './review-ends.ts';
 import { recoverJumps } from './jump-review.ts';
 import { toAffineEnd } from './affine-end.ts';
@@ -45,12 +46,14 @@ export async function solveSystem(system: PolynomialSystem, parameters: Float64A
     key: `${hashText(plan.args.source)}:${plan.args.source.length}:${'fixed' in plan.args ? Array.from(plan.args.fixed).join(',') : ''}`,
     n: plan.N,
     starts: plan.starts.slice(2 * plan.N * first, 2 * plan.N * last),
+    tStart: TRACK_FROM,
+    tEnd: TRACK_TO,
   };
   const workers = options.workers ?? 0;
   let raw: PathEnd[];
   if (workers > 0) raw = await (await sharedPool(workers)).track(job, options.onProgress);
   // in-process: the same homotopy and tracker a worker builds, without importing the module by URL (bundlers)
-  else raw = trackStarts(createTracker(createHomotopy(plan.args)), job.starts, 0, 1, (done) => options.onProgress?.(done, last - first));
+  else raw = trackStarts(createTracker(createHomotopy(plan.args)), job.starts, TRACK_FROM, TRACK_TO, (done) => options.onProgress?.(done, last - first));
   const review = reviewToolsFor(system, parameters, plan);
   const ends = raw.map((e, k) => reviewEnd(toAffineEnd(e, plan.projectiveGroups, scaling, review.tools), first + k, review));
   const report = options.shard ? collectSolutions(system, parameters, ends, bounds, first) : finishWithReview(system, parameters, ends, bounds, plan, review);
@@ -78,7 +81,14 @@ function finishWithReview(system: PolynomialSystem, parameters: Float64Array, en
 function reviewToolsFor(system: PolynomialSystem, parameters: Float64Array, plan: HomotopyPlan): PathReviewTools & { tools: AffineTools } {
   const compiled = compiledTarget(system);
   const tools = createAffineTools(compiled, parameters, plan.scaling);
-  return { tools, retrack: createRetracker(plan, tools), localDimension: createLocalDimensionTest(compiled, parameters, plan.scaling, tools), extended: false };
+  return {
+    tools,
+    retrack: createRetracker(plan, tools),
+    localDimension: createLocalDimensionTest(compiled, parameters, plan.scaling, tools),
+    extendedNewton: createExtendedNewton(compiled, parameters, plan.scaling),
+    condition: (x) => tools.condition(x),
+    extended: true,
+  };
 }
 
 /** The half-open path range [first, last) of shard index/count over `total` paths (the whole range without a shard). */

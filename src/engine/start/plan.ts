@@ -2,7 +2,7 @@ import type { ExprNode, PolynomialSystem } from '../expr/node.ts';
 import { add, mul, param, sub } from '../expr/build.ts';
 import { degree, groupDegrees } from '../expr/degree.ts';
 import { createRandom } from '../random.ts';
-import { compileSystem } from '../compile/compile-system.ts';
+import { compileSystem, type CompiledEquations } from '../compile/compile-system.ts';
 import { substituteUnknowns } from '../expr/substitute.ts';
 import type { SystemScaling } from './scaling.ts';
 import { naturalUnits } from './natural-units.ts';
@@ -12,6 +12,10 @@ import { multihomogenize } from './homogenize.ts';
 import { chartEquation, type ParameterBank, type StartSystem } from './start-system.ts';
 import { totalDegreeStart } from './total-degree.ts';
 import { multihomogeneousStart } from './multihomogeneous.ts';
+
+/** Where the planned homotopies start (s = 1: the start system) and end (s = 0: the target). */
+export const TRACK_FROM = 1;
+export const TRACK_TO = 0;
 
 /** Everything needed to track a start system to the target: the homotopy's module arguments and start points. */
 export interface HomotopyPlan {
@@ -25,17 +29,22 @@ export interface HomotopyPlan {
   readonly count: number;
   readonly starts: Float64Array;
   readonly args: CompiledHomotopyArgs;
+  /** The homotopy's compiled program (for its double-double evaluator, generated only when a path needs it). */
+  readonly program: NonNullable<CompiledEquations['program']>;
 }
 
 /**
- * Plans the homotopy H(X, t) = (1 − t)·γ·G(X) + t·F̂(X) (F̂: the target multihomogenised), with one random
+ * Plans the homotopy H(X, s) = s·γ·G(X) + (1 − s)·F̂(X) (F̂: the target multihomogenised), tracked from the start
+ * system at s = 1 (TRACK_FROM) to the target at s = 0 (TRACK_TO): the end sits at s = 0, where doubles are dense,
+ * so the endgame can sample as close to the end as its conditioning allows (at t = 1 − s, s could not go below
+ * about 1e-15). One random
  * complex chart equation per group left unchanged along the path: the gamma trick of Morgan (1987) with γ
  * uniform on the unit circle. Random draws from `seed`, in this order: γ, the charts (group by group,
  * Gaussian complex), then the start system's forms. Same seed ⇒ same plan. The target is tracked in its natural
  * units (`scaling`, see coefficientScaling): F̂ becomes diag(2^r)·F̂(2^c ⊙ y, h), so its coefficients are near 1 in
  * modulus and its solutions near the unit sphere whatever units the definition was written in. Everything random,
  * the scale factors and the target's parameter values enter the compiled code as parameters (t first), so the code
- * depends only on the system's structure and stays warm across solves and instances.
+ * depends only on the system's structure and stays warm across solves and instances (s is parameter 0).
  */
 export function planHomotopy(system: PolynomialSystem, parameters: Float64Array, seed: number, kind: 'total-degree' | 'multihomogeneous', scaling: SystemScaling = naturalUnits(system, parameters)): HomotopyPlan {
   const np = system.parameters.length;
@@ -48,7 +57,7 @@ export function planHomotopy(system: PolynomialSystem, parameters: Float64Array,
   const groups = validateGroups(system, kind === 'multihomogeneous' ? system.groups : undefined);
   const n = system.unknowns.length, N = n + groups.length;
   const values: number[] = Array.from(parameters);
-  const names: string[] = ['t', ...system.parameters];
+  const names: string[] = ['s', ...system.parameters];
   const bank: ParameterBank = {
     add(re, im) {
       values.push(re, im);
@@ -74,8 +83,8 @@ export function planHomotopy(system: PolynomialSystem, parameters: Float64Array,
   const units = scaling.variables.map((c) => bank.add(2 ** c, 0));
   const rows = scaling.equations.map((r) => bank.add(2 ** r, 0));
   const target = substituteUnknowns(homogeneous, (node) => (node.index < n ? mul(units[node.index]!, node) : node)).map((f, i) => mul(rows[i]!, f));
-  const t = param('t', 0);
-  const equations: ExprNode[] = target.map((f, i) => add(mul(sub(1, t), gamma, start.equations[i]!), mul(t, f)));
+  const s = param('s', 0);
+  const equations: ExprNode[] = target.map((f, i) => add(mul(s, gamma, start.equations[i]!), mul(sub(1, s), f)));
   equations.push(...chartRows);
   const unknowns = [...system.unknowns, ...groups.map((_, k) => `h${k}`)];
   const compiled = compileSystem({ unknowns, parameters: names, equations }, { derivativeParameters: [0] });
@@ -85,5 +94,5 @@ export function planHomotopy(system: PolynomialSystem, parameters: Float64Array,
     fixed: new Float64Array(values),
     projectiveGroups: coords,
   };
-  return { startSystem: kind, scaling, projectiveGroups: coords, N, count: start.count, starts: start.starts, args };
+  return { startSystem: kind, scaling, projectiveGroups: coords, N, count: start.count, starts: start.starts, args, program: compiled.program! };
 }

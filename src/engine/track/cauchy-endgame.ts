@@ -1,5 +1,25 @@
 import type { SegmentStatus, Stepper } from './stepper.ts';
 import { distInf, normInf } from '../complex/packed.ts';
+import type { Homotopy } from '../homotopy.ts';
+
+/** The distances to infinity the endgame watches: `groups` of them, group g's by distance(x, g). */
+export interface InfinityProbe {
+  readonly groups: number;
+  distance(x: Float64Array, group: number): number;
+}
+
+/** The homotopy's distances to infinity per projective group (one group when it reports only the minimum); none without. */
+export function infinityProbe(homotopy: Homotopy): InfinityProbe | undefined {
+  if (homotopy.groupInfinityDistance && homotopy.infinityGroups) {
+    const f = homotopy.groupInfinityDistance.bind(homotopy);
+    return { groups: homotopy.infinityGroups, distance: f };
+  }
+  if (homotopy.infinityDistance) {
+    const f = homotopy.infinityDistance.bind(homotopy);
+    return { groups: 1, distance: (x) => f(x) };
+  }
+  return undefined;
+}
 
 /**
  * An accepted estimate must satisfy ‖H(x̂, end)‖∞ / (1 + ‖x̂‖∞) ≤ this: a loop that also winds around a nearby
@@ -7,8 +27,12 @@ import { distInf, normInf } from '../complex/packed.ts';
  */
 export const ENDPOINT_RESIDUAL = 1e-8;
 
-/** Past this condition estimate of ∂H/∂x at a sample, moving closer to the end is pointless in double precision. */
-const HOPELESS_CONDITION = 1e12;
+/**
+ * Past this condition estimate of ∂H/∂x at a sample, moving closer to the end is pointless: in double precision
+ * Newton cannot correct a sample to better than κ·2⁻⁵³; with double-double residuals (TrackerSettings.precision) the
+ * corrections stay accurate until the LU factorisation of ∂H/∂x itself loses its last digits.
+ */
+const HOPELESS_CONDITION = { double: 1e12, 'double-double': 1e15 } as const;
 
 /** Result of the endgame: status, estimated winding number, and whether the path was seen to diverge. */
 export interface EndgameResult {
@@ -25,6 +49,7 @@ export interface EndgameResult {
  * Divergence test (in the spirit of Huber–Verschelde's valuations at infinity, SIAM J. Numer. Anal. 35, 1998):
  * the distance to infinity d is sampled at s_k = r0·ρ^k. A diverging path has d_k ≈ a·ρ^{k·w}, w > 0: the
  * valuation estimates w_k = log(d_k / d_{k−1}) / log ρ are steady and Aitken's Δ² extrapolation of d tends to 0.
+ * With several projective groups the test runs on each group's distance: one group diverging suffices.
  * A finite end has d_k ≈ d* + a·ρ^{k/c}: its w_k shrink toward 0 and Aitken recovers d* > 0 once d_k nears d*.
  * The verdict needs evidence, never a fixed distance: the last three w_k in [1/64, 64] within 10 % of each other,
  * the extrapolated limit below a quarter of d, and d fallen by at least DIVERGENCE_DROP since the endgame began
@@ -53,19 +78,25 @@ const VALUATION_SPREAD = 1.1;
  * residual is ≤ ENDPOINT_RESIDUAL (winding number: the last loop's, or 0 = undetermined); otherwise the path fails.
  * Before a divergence verdict and before that fallback, Newton at the end is tried from the sample (see settle). Writes the estimate (or, diverging, the last sample) into x.
  */
-export function createCauchyEndgame(stepper: Stepper, infinityDistance?: (x: Float64Array) => number): (x: Float64Array, endRe: number, endIm: number, uRe: number, uIm: number, r0: number) => EndgameResult {
+export function createCauchyEndgame(stepper: Stepper, probe?: InfinityProbe): (x: Float64Array, endRe: number, endIm: number, uRe: number, uIm: number, r0: number) => EndgameResult {
   const len = 2 * stepper.n;
   const start = new Float64Array(len), sum = new Float64Array(len), estimate = new Float64Array(len), previous = new Float64Array(len);
   const result: EndgameResult = { status: 'ok', winding: 1, diverged: false };
-  const dd = new Float64Array(4), cc = new Float64Array(3);
+  const groups = probe?.groups ?? 0;
+  // per group g: the last four distances to infinity at dd[4g … 4g + 3], and the distance where the endgame began
+  const dd = new Float64Array(4 * groups), dStart = new Float64Array(groups), cc = new Float64Array(3);
+  const infinityDistance = probe && ((x: Float64Array): number => {
+    let d = Infinity;
+    for (let g = 0; g < groups; g++) d = Math.min(d, probe.distance(x, g));
+    return d;
+  });
   return (x, endRe, endIm, uRe, uIm, r0) => {
     const s = stepper.settings;
     let r = r0, havePrevious = false, lastWinding = 0, inZone = false, step = NaN, agreement = Infinity;
     let stepStatus: SegmentStatus = 'ok';
     dd.fill(NaN);
     cc.fill(NaN);
-    if (infinityDistance) dd[3] = infinityDistance(x);
-    const dStart = dd[3]!;
+    for (let g = 0; g < groups; g++) dd[4 * g + 3] = dStart[g] = probe!.distance(x, g);
     result.diverged = false;
     for (let k = 0; k < 2 * s.maxRounds; k++) {
       if (inZone) {
@@ -78,7 +109,9 @@ export function createCauchyEndgame(stepper: Stepper, infinityDistance?: (x: Flo
           if (havePrevious && winding === lastWinding && (agreement = distInf(estimate, previous) / (1 + normInf(estimate))) <= s.endgameTolerance
             && stepper.residual(estimate, endRe, endIm) <= ENDPOINT_RESIDUAL) {
             x.set(estimate);
-            return done(winding, atInfinity(x, Math.max(agreement, s.finalTolerance)));
+            // at infinity when the limit is, to within its accuracy, or when the samples' distances to infinity were
+            // still falling steadily toward 0 (the loops' mean then carries the truncation of a diverging expansion)
+            return done(winding, atInfinity(x, Math.max(agreement, s.finalTolerance)) || (probe !== undefined && steadyDecay(false)));
           }
           previous.set(estimate);
         }
@@ -93,9 +126,9 @@ export function createCauchyEndgame(stepper: Stepper, infinityDistance?: (x: Flo
         break;
       }
       r = rNext;
-      if (infinityDistance && diverging(infinityDistance(x), true)) return settle(x) ? done(1, false) : done(1, true);
+      if (probe && diverging(x, true)) return settle(x) ? done(1, false) : done(1, true);
       stepper.residual(x, endRe + r * uRe, endIm + r * uIm); // condition estimate at this sample
-      if (stepper.condition > HOPELESS_CONDITION) break;
+      if (stepper.condition > HOPELESS_CONDITION[s.precision ?? 'double']) break;
       if (!inZone) {
         const d = distInf(x, start);
         cc[0] = cc[1]!; cc[1] = cc[2]!; cc[2] = Math.log(s.radiusRatio) / Math.log(d / step);
@@ -108,20 +141,16 @@ export function createCauchyEndgame(stepper: Stepper, infinityDistance?: (x: Flo
     // the last loop estimate (else the last good sample, polished by Newton at the end) is accepted as a singular
     // end when its residual is at most ENDPOINT_RESIDUAL, with the last winding number (0: undetermined).
     // (A nonsingular end has winding number 1 by the implicit function theorem, whatever the loops said.)
-    // The distance to infinity still falling steadily at the last samples is evidence enough of divergence.
-    const fallingAtEnd = infinityDistance !== undefined && steadyDecay(false);
+    // The distance to infinity still falling steadily at the last samples is evidence enough of divergence, unless
+    // Newton at the end finds a nonsingular end there (settle); it outweighs a loop estimate that never agreed.
+    if (settle(x)) return done(1, false);
+    if (probe && steadyDecay(false)) return done(lastWinding || 1, true);
     if (havePrevious && stepper.residual(previous, endRe, endIm) <= ENDPOINT_RESIDUAL) {
       x.set(previous);
-      const nonsingular = stepper.condition <= s.singularCondition;
-      return done(nonsingular ? 1 : lastWinding, !nonsingular && fallingAtEnd);
+      return done(stepper.condition <= s.singularCondition ? 1 : lastWinding, false);
     }
-    if (settle(x)) return done(1, false);
     stepper.newton(x, endRe, endIm, s.finalTolerance, 8);
-    if (stepper.residual(x, endRe, endIm) <= ENDPOINT_RESIDUAL) {
-      if (stepper.condition <= s.singularCondition) return done(1, false);
-      return done(0, fallingAtEnd);
-    }
-    if (fallingAtEnd) return done(1, true);
+    if (stepper.residual(x, endRe, endIm) <= ENDPOINT_RESIDUAL) return done(stepper.condition <= s.singularCondition ? 1 : 0, false);
     return fail(stepStatus === 'ok' ? 'no-convergence' : stepStatus);
 
     /**
@@ -137,21 +166,26 @@ export function createCauchyEndgame(stepper: Stepper, infinityDistance?: (x: Flo
       return true;
     }
 
-    /** Records the next distance to infinity and applies the divergence test (with the drop since the start). */
-    function diverging(next: number, needDrop: boolean): boolean {
-      dd.copyWithin(0, 1);
-      dd[3] = next;
+    /** Records the next distances to infinity (every group) and applies the divergence test (with the drop since the start). */
+    function diverging(x: Float64Array, needDrop: boolean): boolean {
+      for (let g = 0; g < groups; g++) {
+        dd.copyWithin(4 * g, 4 * g + 1, 4 * g + 4);
+        dd[4 * g + 3] = probe!.distance(x, g);
+      }
       return steadyDecay(needDrop);
     }
 
-    /** The last four distances to infinity decay steadily toward 0 (see the divergence test). */
+    /** Some group's last four distances to infinity decay steadily toward 0 (see the divergence test). */
     function steadyDecay(needDrop: boolean): boolean {
       const logRho = Math.log(s.radiusRatio);
-      const w1 = Math.log(dd[1]! / dd[0]!) / logRho, w2 = Math.log(dd[2]! / dd[1]!) / logRho, w3 = Math.log(dd[3]! / dd[2]!) / logRho;
-      const lo = Math.min(w1, w2, w3), hi = Math.max(w1, w2, w3);
-      const [e0, e1, e2] = [dd[1]!, dd[2]!, dd[3]!];
-      const limit = e2 - ((e2 - e1) * (e2 - e1)) / (e2 - 2 * e1 + e0);
-      return (!needDrop || e2 <= DIVERGENCE_DROP * dStart) && lo >= 1 / 64 && hi <= 64 && hi <= VALUATION_SPREAD * lo && Math.abs(limit) <= LIMIT_FRACTION * e2;
+      for (let g = 0; g < groups; g++) {
+        const d0 = dd[4 * g]!, d1 = dd[4 * g + 1]!, d2 = dd[4 * g + 2]!, d3 = dd[4 * g + 3]!;
+        const w1 = Math.log(d1 / d0) / logRho, w2 = Math.log(d2 / d1) / logRho, w3 = Math.log(d3 / d2) / logRho;
+        const lo = Math.min(w1, w2, w3), hi = Math.max(w1, w2, w3);
+        const limit = d3 - ((d3 - d2) * (d3 - d2)) / (d3 - 2 * d2 + d1);
+        if ((!needDrop || d3 <= DIVERGENCE_DROP * dStart[g]!) && lo >= 1 / 64 && hi <= 64 && hi <= VALUATION_SPREAD * lo && Math.abs(limit) <= LIMIT_FRACTION * d3) return true;
+      }
+      return false;
     }
 
     /** A limit estimate known to relative accuracy `accuracy` is at infinity when its distance to infinity is within ten times that. */

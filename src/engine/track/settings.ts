@@ -6,7 +6,7 @@
 export interface TrackerSettings {
   /** Largest step |Δt|. */
   readonly maxStep: number;
-  /** Smallest step |Δt| before the path fails with 'step-underflow'. */
+  /** Smallest step before the path fails with 'step-underflow', relative to the length of the segment being tracked. */
   readonly minStep: number;
   /** Attempted steps (accepted + rejected) per path before 'step-budget'. */
   readonly maxSteps: number;
@@ -41,6 +41,13 @@ export interface TrackerSettings {
   readonly endgameTolerance: number;
   /** How many times a failed path is re-tracked with stricter settings. */
   readonly retries: number;
+  /**
+   * 'double' (default), or 'double-double': every Newton correction (corrector, final Newton, residual checks) uses
+   * the homotopy's evaluateValueExtended, so that in the style of iterative refinement with extra-precise residuals
+   * Newton converges to the double nearest the path wherever κ·2⁻⁵³ < 1, instead of stalling at κ·2⁻⁵³; the
+   * endgame may then sample up to condition 1e15 (1e12 in double). Ignored by homotopies without it.
+   */
+  readonly precision?: 'double' | 'double-double';
 }
 
 /** The default settings (see TrackerSettings for the meaning of each). */

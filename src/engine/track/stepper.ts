@@ -39,6 +39,12 @@ export function createStepper(homotopy: Homotopy, settings: TrackerSettings): St
   const xs = new Float64Array(len), xp = new Float64Array(len), dx = new Float64Array(len);
 
   const self: Stepper = { n, steps: 0, rejected: 0, stepSize: settings.maxStep / 2, condition: 1, settings, segment, newton, residual };
+  const extended = homotopy.evaluateValueExtended?.bind(homotopy);
+  /** Evaluates H, ∂H/∂x and ∂H/∂t at (z, t) for a Newton correction: in extended precision, H is replaced by its double-double value. */
+  function evaluateForCorrection(z: Float64Array, tRe: number, tIm: number): void {
+    homotopy.evaluate(z, tRe, tIm, h, jac, ht);
+    if (extended && self.settings.precision === 'double-double') extended(z, tRe, tIm, h);
+  }
 
   let wantCondition = true;
   /** Factors jac; sets `condition` (0 = not estimated: the solver's factorOnly was used); false when singular. */
@@ -114,7 +120,7 @@ export function createStepper(homotopy: Homotopy, settings: TrackerSettings): St
         const shrink = Number.isFinite(-first) && -first > 0 ? 0.9 * Math.pow(s.predictorTolerance / -first, 0.2) : 0.5;
         self.stepSize = hh * length * Math.min(0.5, Math.max(0.1, shrink));
         have1 = true;
-        if (self.stepSize < s.minStep) return 'step-underflow';
+        if (self.stepSize < s.minStep * length) return 'step-underflow';
       }
     }
     return 'ok';
@@ -128,7 +134,7 @@ export function createStepper(homotopy: Homotopy, settings: TrackerSettings): St
     const s = self.settings;
     let previous = Infinity, first = -1;
     for (let it = 0; it < s.maxCorrectorIterations; it++) {
-      homotopy.evaluate(xp, tRe, tIm, h, jac, ht);
+      evaluateForCorrection(xp, tRe, tIm);
       if (!factorJacobian()) return -Infinity;
       solver.solve(h, dx);
       const delta = normInf(dx) / (1 + normInf(xp));
@@ -153,7 +159,7 @@ export function createStepper(homotopy: Homotopy, settings: TrackerSettings): St
   function newton(x: Float64Array, tRe: number, tIm: number, tol: number, maxIterations: number): boolean {
     let previous = Infinity;
     for (let it = 0; it < maxIterations; it++) {
-      homotopy.evaluate(x, tRe, tIm, h, jac, ht);
+      evaluateForCorrection(x, tRe, tIm);
       self.condition = solver.factor(jac);
       if (!Number.isFinite(self.condition)) return false;
       solver.solve(h, dx);
@@ -168,7 +174,7 @@ export function createStepper(homotopy: Homotopy, settings: TrackerSettings): St
   }
 
   function residual(x: Float64Array, tRe: number, tIm: number): number {
-    homotopy.evaluate(x, tRe, tIm, h, jac, ht);
+    evaluateForCorrection(x, tRe, tIm);
     self.condition = solver.factor(jac);
     return normInf(h) / (1 + normInf(x));
   }

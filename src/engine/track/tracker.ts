@@ -1,7 +1,7 @@
 import type { FailureReason, Homotopy, PathEnd, PathOutcome } from '../homotopy.ts';
 import { allFinite } from '../complex/packed.ts';
 import { createStepper, type SegmentStatus, type Stepper } from './stepper.ts';
-import { createCauchyEndgame } from './cauchy-endgame.ts';
+import { createCauchyEndgame, infinityProbe } from './cauchy-endgame.ts';
 import { DEFAULT_TRACKER_SETTINGS, stricterSettings, type TrackerSettings } from './settings.ts';
 
 /**
@@ -35,7 +35,7 @@ export interface Tracker {
 export function createTracker(homotopy: Homotopy, settings: Partial<TrackerSettings> = {}): Tracker {
   const base: TrackerSettings = { ...DEFAULT_TRACKER_SETTINGS, ...settings };
   const stepper = createStepper(homotopy, base);
-  const endgame = createCauchyEndgame(stepper, homotopy.infinityDistance?.bind(homotopy));
+  const endgame = createCauchyEndgame(stepper, infinityProbe(homotopy));
   const len = 2 * homotopy.n;
   const saved = new Float64Array(len);
 

@@ -54,8 +54,14 @@ describe('toAffineEnd', () => {
     expect(e.windingNumber).toBe(1);
   });
 
-  it('keeps a singular verdict away from a solution', () => {
+  it('keeps a singular verdict away from a solution (the review re-tracks an undecided one)', () => {
     const e = toAffineEnd(end('singular', [1, 0, 1, 0, 0.5, 0]), groups, units, tools);
+    expect(e.outcome).toBe('singular');
+  });
+
+  it('keeps a singular verdict at a singular solution: x² = y² = 0 at the origin', () => {
+    const double = createAffineTools(compileSystem({ unknowns: ['x', 'y'], parameters: [], equations: [mul(x, x), mul(y, y)] }), new Float64Array(0));
+    const e = toAffineEnd(end('singular', [1e-9, 0, -1e-9, 0, 0.5, 0]), groups, units, double);
     expect(e.outcome).toBe('singular');
   });
 

@@ -1,13 +1,13 @@
 import { describe, expect, it } from 'vitest';
 import { solveSystem } from '../../../src/engine/solve/solve-system.ts';
-import { planHomotopy } from '../../../src/engine/start/plan.ts';
+import { planHomotopy, TRACK_FROM } from '../../../src/engine/start/plan.ts';
 import { createHomotopy } from '../../../src/engine/homotopies/compiled-module.ts';
 import { createRandom } from '../../../src/engine/random.ts';
 import { bitangents, linesOnCubic } from '../../../generators/bench/engine-systems.ts';
 import { normInf } from '../../../src/engine/complex/packed.ts';
 
 describe('multihomogeneous start systems (Morgan–Sommese, Appl. Math. Comput. 24, 1987)', () => {
-  it('has as many start points as the two-homogeneous bound, each solving the start system (t = 0)', () => {
+  it('has as many start points as the two-homogeneous bound, each solving the start system (s = 1, where tracking starts)', () => {
     const system = linesOnCubic(createRandom(2));
     const plan = planHomotopy(system, new Float64Array(0), 3, 'multihomogeneous');
     expect(plan.count).toBe(45); // [derived] REFERENCES.md: two groups give 45
@@ -15,7 +15,7 @@ describe('multihomogeneous start systems (Morgan–Sommese, Appl. Math. Comput. 
     const N = plan.N, h = new Float64Array(2 * N), jac = new Float64Array(2 * N * N), ht = new Float64Array(2 * N);
     for (let k = 0; k < plan.count; k++) {
       const x = plan.starts.subarray(2 * N * k, 2 * N * (k + 1));
-      H.evaluate(x, 0, 0, h, jac, ht);
+      H.evaluate(x, TRACK_FROM, 0, h, jac, ht);
       expect(normInf(h)).toBeLessThan(1e-12 * (1 + normInf(x)));
     }
   });
