@@ -67,8 +67,8 @@ export function hyperplaneExcessFamily(degrees: readonly number[]): StressFamily
  * the points off that curve where (q₁, q₂) ≠ 0 lies in the kernel of the 3×2 matrix [a_i b_i]: with [u:v] ∈ P¹ they
  * are the solutions in P³×P¹ of u·q₂ − v·q₁ = 0 (bidegree (2,1)) and a_i·u + b_i·v = 0 (bidegree (e,1)), generic
  * members of base-point-free systems, so by the multihomogeneous Bézout count (coefficient of H³h in
- * (2H + h)(eH + h)³) there are e³ + 6e² of them (our own derivation; for e = 1, 2 checked by an independent
- * Gröbner-basis computation, see the test of this family).
+ * (2H + h)(eH + h)³) there are e³ + 6e² of them (our own derivation; checked independently by Gröbner bases in
+ * Singular, over Q for e = 1, 2 and over F_32003 for e = 1, 2, 3: test/engine/stress/isolated-counts.sing).
  */
 export function curveExcessFamily(e: number): StressFamily {
   if (!Number.isInteger(e) || e < 1) throw new RangeError(`curve excess needs a degree e ≥ 1, got ${e}`);
