@@ -6,7 +6,6 @@ import { createPoolLegTracker } from '../../src/engine/parameter/pool-tracker.ts
 import { randomParameterPoint } from '../../src/engine/parameter/route.ts';
 import { solveByParameterHomotopy, type ParameterProblem, type ParameterSolveReport } from '../../src/engine/parameter/solve-by-parameter-homotopy.ts';
 import { buildStartSet } from '../problems/conics/start-set.ts';
-import { naiveRun } from '../problems/conics/naive-run.ts';
 import fiveConics from '../problems/conics/conics-tangent-to-5-conics.ts';
 import type { BenchCase, BenchOutcome } from './bench-case.ts';
 
@@ -37,8 +36,8 @@ let instance = 0;
 /**
  * The five-conic benchmarks (3264 conics tangent to five general conics: Chasles 1864): parameter homotopy from the
  * committed generic set to fresh random complex instances, monodromy discovery from a solution-first seed, the real
- * stage-lights demo (five ellipses), 20 random instances in one case, and the naive 7776-path total-degree run on
- * the sextic formulation (found = genuine conics; the 4512 others should end on double lines). A warm pool of two workers.
+ * stage-lights demo (five ellipses) and 20 random instances in one case. A warm pool of two workers. The naive
+ * 7776-path total-degree run is a case of the stress suite (naive-five-conics-case.ts).
  */
 export const cases: BenchCase[] = [
   {
@@ -82,15 +81,6 @@ export const cases: BenchCase[] = [
         steps.push(...(s.steps ?? []));
       }
       return { paths, found, failedPaths, steps };
-    },
-  },
-  {
-    name: 'five conics: naive total-degree homotopy on the sextic formulation, 7776 paths (found = genuine conics)',
-    expected: 3264,
-    async run() {
-      const s = await naiveRun(fiveConics, 'generic', 1, WORKERS);
-      process.stderr.write(`naive run: ${s.genuine} genuine conics (${s.genuinePaths} paths, ${s.relabelledPaths} relabelled), ${s.doubleLinePaths} paths on double lines, ${s.otherPaths} other, ${s.failedPaths} failed\n`);
-      return { paths: s.paths, found: s.genuine, failedPaths: s.failedPaths };
     },
   },
 ];

@@ -1,0 +1,16 @@
+import { add, mul, pow } from '../../../src/engine/expr/build.ts';
+import type { ExprNode } from '../../../src/engine/expr/node.ts';
+import { monomialExponents } from '../../problems/shared/monomials.ts';
+import type { CoefficientSource } from './coefficient-source.ts';
+
+/**
+ * Σ c_α · Π coordinates[j]^α_j over every monomial of total degree ≤ degree in the given coordinate nodes (highest
+ * degree first, see monomialExponents), each c_α a fresh coefficient of the source. The coordinates may be any
+ * nodes (unknowns, scaled unknowns, linear forms), so one builder serves every change of coordinates.
+ */
+export function densePolynomial(coordinates: readonly ExprNode[], degree: number, source: CoefficientSource): ExprNode {
+  return add(...monomialExponents(coordinates.length, degree).map((alpha) => {
+    const powers = alpha.flatMap((k, j) => (k === 0 ? [] : [k === 1 ? coordinates[j]! : pow(coordinates[j]!, k)]));
+    return mul(source.coefficient(), ...powers);
+  }));
+}
