@@ -64,6 +64,15 @@ export interface PathEnd {
   readonly point: Float64Array;
   /** true when `point` is a direction at infinity (X_0 … X_{n−1}) / max_j |X_j| rather than a finite point. */
   readonly direction?: true;
+  /**
+   * Present when the tracker could not confirm its verdict in this precision: for an end the endgame could not decide
+   * ('failed', or 'singular' with winding number 0), the path's point (homotopy coordinates) at real t = resumeAt where
+   * the endgame began; for a 'singular' end whose loop estimate (winding number above 1) the path could not be checked
+   * against inward, the sample the estimate rests on. A re-track of the end alone, Tracker.track(resumeFrom,
+   * resumeAt, tEnd), starts there.
+   */
+  readonly resumeFrom?: Float64Array;
+  readonly resumeAt?: number;
   /** ‖H(x, 1)‖∞ / (1 + ‖x‖∞) at the endpoint. */
   readonly residual: number;
   /** Condition estimate of ∂H/∂x at the endpoint (Infinity when singular). */

@@ -1,6 +1,7 @@
 import type { PathEnd } from '../homotopy.ts';
 import type { SystemScaling } from '../start/scaling.ts';
 import type { AffineTools } from './affine.ts';
+import { ENDPOINT_RESIDUAL } from '../track/cauchy-endgame.ts';
 
 /**
  * A finite end solves the target when its backward error (AffineTools.residual: max_i |f_i(x)| / |f_i|(|x|)) is at
@@ -23,8 +24,9 @@ const NEWTON_MOVE = 1e-6;
  * unknowns in natural units y, see planHomotopy) into the target's unknowns x = 2^c ⊙ y. A 'regular' end (nonsingular
  * in the homotopy's charts, and not at infinity to within its accuracy: the tracker decides that) is finite however
  * large, and it is kept 'regular' only if it solves the target: Newton (relative 1e-13 in natural units, ≤ 5 iterations) moves
- * it ≤ 1e-6 to a backward error ≤ SOLVED_BACKWARD_ERROR with κ ≤ 1e14; else it is 'failed' ('no-convergence'), for
- * the solver to re-track. A 'singular' finite end with backward error ≤ SOLVED_BACKWARD_ERROR and κ ≤ 1e6 is re-judged
+ * it ≤ 1e-6 to a backward error ≤ SOLVED_BACKWARD_ERROR with κ ≤ 1e14; else it is 'at-infinity' when it solves the
+ * homogenised target (the tracker's residual ≤ ENDPOINT_RESIDUAL: a nonsingular root whose homogenising coordinate
+ * the affine coordinates cannot tell from zero), or 'failed' ('no-convergence'), for the solver to re-track. A 'singular' finite end with backward error ≤ SOLVED_BACKWARD_ERROR and κ ≤ 1e6 is re-judged
  * 'regular' (the projective chart was badly scaled there). (A singular end's backward error says little: at a double
  * root the attainable accuracy is 2⁻²⁶, where x² has backward error near 1; undecided singular ends are re-tracked by
  * the solver's review instead.) 'at-infinity' ends (and ends with some h_g = 0) carry the
@@ -51,6 +53,9 @@ export function toAffineEnd(end: PathEnd, groups: readonly (readonly number[])[]
     tools.newton(refined, 1e-13, 5);
     const residual = tools.residual(refined), condition = tools.condition(refined);
     if (tools.distance(x, refined) <= NEWTON_MOVE && residual <= SOLVED_BACKWARD_ERROR && condition <= SANE_CONDITION) return { ...end, point: x, residual: tools.residual(x), condition };
+    // a nonsingular root of the homogenised target whose dehomogenisation solves nothing: its homogenising coordinate
+    // is zero to within what the affine coordinates can resolve (a nonsingular solution at infinity)
+    if (end.residual <= ENDPOINT_RESIDUAL) return direction({ ...end, outcome: 'at-infinity' }, X, n);
     return { ...end, outcome: 'failed', failure: 'no-convergence', point: x, residual: tools.residual(x), condition: tools.condition(x) };
   }
   const residual = tools.residual(x), condition = tools.condition(x);

@@ -20,15 +20,16 @@ const EXTENDED_ROUNDS = 20;
  * stricterSettings(default, k) (steps and tolerances divided by 4^k); 'extended' the same settings (the default
  * ones for k = 0) with double-double residuals (TrackerSettings.precision) and EXTENDED_ROUNDS endgame rounds, the
  * homotopy's double-double evaluator generated on first use. The end is converted by toAffineEnd. Trackers are made once per mode. Deterministic: the same path and mode
- * give the same end.
+ * give the same end. An 'extended' re-track of an end that kept the point where its endgame began (PathEnd.resumeFrom)
+ * re-tracks the end alone, from there.
  */
-export function createRetracker(plan: HomotopyPlan, tools: AffineTools): (path: number, mode: RetrackMode) => PathEnd {
+export function createRetracker(plan: HomotopyPlan, tools: AffineTools): (path: number, mode: RetrackMode, from?: PathEnd) => PathEnd {
   const homotopy = createHomotopy(plan.args);
   const trackers = new Map<string, Tracker>();
   let extended: Homotopy | null = null;
   const extendedHomotopy = (): Homotopy => (extended ??= createHomotopy({ ...plan.args, extendedSource: compileValuesInDoubleDouble(plan.program).source }));
   const len = 2 * plan.N;
-  return (path, mode) => {
+  return (path, mode, from) => {
     const key = `${mode.kind}-${mode.attempt}`;
     let tracker = trackers.get(key);
     if (!tracker) {
@@ -36,7 +37,8 @@ export function createRetracker(plan: HomotopyPlan, tools: AffineTools): (path: 
       tracker = mode.kind === 'extended' ? createTracker(extendedHomotopy(), { ...settings, precision: 'double-double', maxRounds: EXTENDED_ROUNDS }) : createTracker(homotopy, settings);
       trackers.set(key, tracker);
     }
-    const end = tracker.track(plan.starts.subarray(path * len, (path + 1) * len), TRACK_FROM, TRACK_TO);
+    const resume = mode.kind === 'extended' && from?.resumeFrom !== undefined && from.resumeAt !== undefined;
+    const end = resume ? tracker.track(from.resumeFrom!, from.resumeAt!, TRACK_TO) : tracker.track(plan.starts.subarray(path * len, (path + 1) * len), TRACK_FROM, TRACK_TO);
     return toAffineEnd(end, plan.projectiveGroups, plan.scaling, tools);
   };
 }

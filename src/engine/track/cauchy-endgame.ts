@@ -43,6 +43,14 @@ export interface EndgameResult {
    * sample), or the loops' limit lies at infinity within its accuracy (x is the limit).
    */
   diverged: boolean;
+  /**
+   * true when a loop estimate with winding number above 1 was accepted without its inward check (the samples inward
+   * passed the hopeless condition first): then `sample` holds the path's point at radius `sampleRadius` on the
+   * endgame's ray, from which a re-track in extended precision can check it.
+   */
+  provisional: boolean;
+  readonly sample: Float64Array;
+  sampleRadius: number;
 }
 
 /**
@@ -60,6 +68,7 @@ export interface EndgameResult {
  * corrected to that).
  */
 const DIVERGENCE_DROP = 1e-4;
+
 const LIMIT_FRACTION = 0.25;
 const VALUATION_SPREAD = 1.1;
 
@@ -73,15 +82,15 @@ const VALUATION_SPREAD = 1.1;
  * 1e-6; no closure within maxWinding turns gives no estimate at this radius); the end value is the mean of the
  * m·c equally spaced samples (trapezoid rule for Cauchy's integral formula in s^{1/c}). Accepted when two
  * successive estimates with the same c agree to endgameTolerance and the estimate's residual passes
- * ENDPOINT_RESIDUAL. The radii stop early where the condition estimate passes 1e12 or a step fails. Then the
+ * ENDPOINT_RESIDUAL and, for c > 1, confirmed by the path inward (confirmedInward). The radii stop early where the condition estimate passes 1e12 or a step fails. Then the
  * last loop estimate, or else the last good sample after Newton at the end, is a singular end when its
  * residual is ≤ ENDPOINT_RESIDUAL (winding number: the last loop's, or 0 = undetermined); otherwise the path fails.
  * Before a divergence verdict and before that fallback, Newton at the end is tried from the sample (see settle). Writes the estimate (or, diverging, the last sample) into x.
  */
 export function createCauchyEndgame(stepper: Stepper, probe?: InfinityProbe): (x: Float64Array, endRe: number, endIm: number, uRe: number, uIm: number, r0: number) => EndgameResult {
   const len = 2 * stepper.n;
-  const start = new Float64Array(len), sum = new Float64Array(len), estimate = new Float64Array(len), previous = new Float64Array(len);
-  const result: EndgameResult = { status: 'ok', winding: 1, diverged: false };
+  const start = new Float64Array(len), sum = new Float64Array(len), estimate = new Float64Array(len), previous = new Float64Array(len), inward = new Float64Array(len);
+  const result: EndgameResult = { status: 'ok', winding: 1, diverged: false, provisional: false, sample: new Float64Array(len), sampleRadius: 0 };
   const groups = probe?.groups ?? 0;
   // per group g: the last four distances to infinity at dd[4g … 4g + 3], and the distance where the endgame began
   const dd = new Float64Array(4 * groups), dStart = new Float64Array(groups), cc = new Float64Array(3);
@@ -92,12 +101,13 @@ export function createCauchyEndgame(stepper: Stepper, probe?: InfinityProbe): (x
   });
   return (x, endRe, endIm, uRe, uIm, r0) => {
     const s = stepper.settings;
-    let r = r0, havePrevious = false, lastWinding = 0, inZone = false, step = NaN, agreement = Infinity;
+    let r = r0, havePrevious = false, lastWinding = 0, inZone = false, step = NaN, agreement = Infinity, confirmRadius = r0;
     let stepStatus: SegmentStatus = 'ok';
     dd.fill(NaN);
     cc.fill(NaN);
     for (let g = 0; g < groups; g++) dd[4 * g + 3] = dStart[g] = probe!.distance(x, g);
     result.diverged = false;
+    result.provisional = false;
     for (let k = 0; k < 2 * s.maxRounds; k++) {
       if (inZone) {
         const winding = loop(x, r);
@@ -108,6 +118,20 @@ export function createCauchyEndgame(stepper: Stepper, probe?: InfinityProbe): (x
         if (winding > 0) {
           if (havePrevious && winding === lastWinding && (agreement = distInf(estimate, previous) / (1 + normInf(estimate))) <= s.endgameTolerance
             && stepper.residual(estimate, endRe, endIm) <= ENDPOINT_RESIDUAL) {
+            const check = winding > 1 ? confirmedInward(x, r, winding) : 'confirmed';
+            if (check === 'rejected') {
+              // the samples inward left the estimate behind: the loops enclosed a second branch point near the end;
+              // go on from the sample reached, inside it
+              r = confirmRadius;
+              havePrevious = false;
+              lastWinding = 0;
+              continue;
+            }
+            if (check === 'unchecked') {
+              result.sample.set(x);
+              result.sampleRadius = r;
+            }
+            result.provisional = check === 'unchecked';
             x.set(estimate);
             // at infinity when the limit is, to within its accuracy, or when the samples' distances to infinity were
             // still falling steadily toward 0 (the loops' mean then carries the truncation of a diverging expansion)
@@ -144,8 +168,12 @@ export function createCauchyEndgame(stepper: Stepper, probe?: InfinityProbe): (x
     // The distance to infinity still falling steadily at the last samples is evidence enough of divergence, unless
     // Newton at the end finds a nonsingular end there (settle); it outweighs a loop estimate that never agreed.
     if (settle(x)) return done(1, false);
-    if (probe && steadyDecay(false)) return done(lastWinding || 1, true);
+    if (probe && (steadyDecay(false) || collapsed())) return done(lastWinding || 1, true);
     if (havePrevious && stepper.residual(previous, endRe, endIm) <= ENDPOINT_RESIDUAL) {
+      // an estimate no second loop agreed with: provisional, resting on the last good sample
+      result.sample.set(x);
+      result.sampleRadius = r;
+      result.provisional = true;
       x.set(previous);
       return done(stepper.condition <= s.singularCondition ? 1 : lastWinding, false);
     }
@@ -184,6 +212,50 @@ export function createCauchyEndgame(stepper: Stepper, probe?: InfinityProbe): (x
         const lo = Math.min(w1, w2, w3), hi = Math.max(w1, w2, w3);
         const limit = d3 - ((d3 - d2) * (d3 - d2)) / (d3 - 2 * d2 + d1);
         if ((!needDrop || d3 <= DIVERGENCE_DROP * dStart[g]!) && lo >= 1 / 64 && hi <= 64 && hi <= VALUATION_SPREAD * lo && Math.abs(limit) <= LIMIT_FRACTION * d3) return true;
+      }
+      return false;
+    }
+
+    /**
+     * Checks a loop estimate with winding number c > 1 against the path itself: tracked inward from the loop's start
+     * x at radius r down to the endgame's smallest radius, the sample's distance to the estimate must shrink at least like
+     * (s/r)^{1/c} (within a factor 4). Loops that enclose a second branch point near the end average the ends of
+     * two different paths into a stable estimate that solves F wherever F is small (near an excess set); inward of
+     * that branch point the path leaves the estimate at a fixed distance. On a mismatch, x moves to the sample
+     * reached and confirmRadius to its radius ('rejected'); 'confirmed' at the smallest radius; 'unchecked' when the
+     * inward samples fail or pass the hopeless condition first (nothing closer to compare with in this precision).
+     */
+    function confirmedInward(x: Float64Array, r: number, c: number): 'confirmed' | 'rejected' | 'unchecked' {
+      const floor = s.endgameTolerance * (1 + normInf(estimate));
+      const smallest = r0 * Math.pow(s.radiusRatio, 2 * s.maxRounds);
+      const d0 = distInf(x, estimate);
+      inward.set(x);
+      let rr = r;
+      for (let j = 1; rr * s.radiusRatio >= smallest; j++) {
+        const rNext = rr * s.radiusRatio;
+        if (stepper.segment(inward, endRe + rr * uRe, endIm + rr * uIm, endRe + rNext * uRe, endIm + rNext * uIm) !== 'ok') return 'unchecked';
+        rr = rNext;
+        stepper.residual(inward, endRe + rr * uRe, endIm + rr * uIm);
+        if (stepper.condition > HOPELESS_CONDITION[s.precision ?? 'double']) return 'unchecked';
+        if (distInf(inward, estimate) > 4 * d0 * Math.pow(s.radiusRatio, j / c) + floor) {
+          x.set(inward);
+          confirmRadius = rr;
+          return 'rejected';
+        }
+      }
+      return 'confirmed';
+    }
+
+    /**
+     * Some group's distance to infinity fell by at least DIVERGENCE_DROP since the endgame began and by a factor of at
+     * least 1/ρ (valuation ≥ 1) at each of the last three samples: evidence of divergence even where the valuations
+     * never steadied (several scales at once). A finite end slows its approach as the distance nears its limit.
+     */
+    function collapsed(): boolean {
+      for (let g = 0; g < groups; g++) {
+        const d0 = dd[4 * g]!, d1 = dd[4 * g + 1]!, d2 = dd[4 * g + 2]!, d3 = dd[4 * g + 3]!;
+        const rho = s.radiusRatio;
+        if (d3 <= DIVERGENCE_DROP * dStart[g]! && d1 <= rho * d0 && d2 <= rho * d1 && d3 <= rho * d2) return true;
       }
       return false;
     }

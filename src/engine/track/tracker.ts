@@ -38,20 +38,31 @@ export function createTracker(homotopy: Homotopy, settings: Partial<TrackerSetti
   const endgame = createCauchyEndgame(stepper, infinityProbe(homotopy));
   const len = 2 * homotopy.n;
   const saved = new Float64Array(len);
+  /** Whether `saved` holds this attempt's point where the endgame began (the main segment got there). */
+  let reachedEndgame = false;
+
+  /** Set by an attempt whose endgame accepted a provisional estimate on its real ray: where a re-track of the end may start. */
+  let provisionalAt = NaN;
+  const provisionalSample = new Float64Array(len);
 
   function attempt(x: Float64Array, tStart: number, tEnd: number, retry: number): { status: SegmentStatus; winding: number; diverged: boolean } {
     const s = stepper.settings;
     const span = Math.abs(tEnd - tStart);
     const u = tStart < tEnd ? -1 : 1;
-    if (s.endgameStart <= 0 || span <= s.endgameStart) {
+    reachedEndgame = false;
+    provisionalAt = NaN;
+    if (s.endgameStart <= 0) {
       const status = stepper.segment(x, tStart, 0, tEnd, 0);
       if (status === 'ok') stepper.newton(x, tEnd, 0, s.finalTolerance, 6);
       return { status, winding: 1, diverged: false };
     }
-    const tE = tEnd + u * s.endgameStart;
-    const status = stepper.segment(x, tStart, 0, tE, 0);
+    // a start within endgameStart of the end (a resumed end) goes straight to the approach and the endgame
+    const r0 = Math.min(span, s.endgameStart);
+    const tE = tEnd + u * r0;
+    const status = tE === tStart ? 'ok' : stepper.segment(x, tStart, 0, tE, 0);
     if (status !== 'ok') return { status, winding: 1, diverged: false };
     saved.set(x);
+    reachedEndgame = true;
     const approach = stepper.segment(x, tE, 0, tEnd, 0, s.singularCondition, APPROACH_ATTEMPTS);
     if (approach === 'ok' && stepper.newton(x, tEnd, 0, s.finalTolerance, 6) && stepper.condition <= s.singularCondition) {
       return { status: 'ok', winding: 1, diverged: false };
@@ -62,10 +73,14 @@ export function createTracker(homotopy: Homotopy, settings: Partial<TrackerSetti
     const theta = retry === 0 ? 0 : (retry % 2 === 1 ? 1 : -1) * RETRY_TURN;
     const uRe = u * Math.cos(theta), uIm = u * Math.sin(theta);
     if (retry > 0) {
-      const turned = stepper.segment(x, tE, 0, tEnd + s.endgameStart * uRe, s.endgameStart * uIm);
+      const turned = stepper.segment(x, tE, 0, tEnd + r0 * uRe, r0 * uIm);
       if (turned !== 'ok') return { status: turned, winding: 1, diverged: false };
     }
-    const result = endgame(x, tEnd, 0, uRe, uIm, s.endgameStart);
+    const result = endgame(x, tEnd, 0, uRe, uIm, r0);
+    if (result.status === 'ok' && result.provisional && uIm === 0) {
+      provisionalSample.set(result.sample);
+      provisionalAt = tEnd + uRe * result.sampleRadius;
+    }
     if (result.status === 'ok' && result.winding === 1 && !result.diverged) stepper.newton(x, tEnd, 0, s.finalTolerance, 6);
     return { status: result.status, winding: result.winding, diverged: result.diverged };
   }
@@ -85,7 +100,13 @@ export function createTracker(homotopy: Homotopy, settings: Partial<TrackerSetti
       const finite = allFinite(x, len);
       if ((status === 'ok' && finite) || k >= base.retries) {
         const failure: FailureReason | undefined = !finite ? 'non-finite' : status === 'ok' ? undefined : status === 'ill-conditioned' ? 'no-convergence' : status;
-        return finish(x, tEnd, winding, diverged, steps, rejected, k, failure);
+        const end = finish(x, tEnd, winding, diverged, steps, rejected, k, failure);
+        // an end the endgame could not decide keeps the point where the endgame began, and a provisional singular end
+        // the sample its estimate rests on, so that only the end is re-tracked in extended precision
+        const undecided = end.outcome === 'failed' || (end.outcome === 'singular' && end.windingNumber === 0);
+        if (undecided && reachedEndgame) return { ...end, resumeFrom: Float64Array.from(saved), resumeAt: tEnd + (tStart < tEnd ? -1 : 1) * Math.min(Math.abs(tEnd - tStart), base.endgameStart) };
+        if (end.outcome === 'singular' && !Number.isNaN(provisionalAt)) return { ...end, resumeFrom: Float64Array.from(provisionalSample), resumeAt: provisionalAt };
+        return end;
       }
     }
   }

@@ -12,7 +12,7 @@ const compiled = compileSystem({ unknowns: ['x', 'y'], parameters: [], equations
 const tools = createAffineTools(compiled, new Float64Array(0));
 const units = noScaling(2);
 const groups = [[0, 1, 2]]; // homotopy coordinates (Y₀, Y₁, h)
-const end = (outcome: PathEnd['outcome'], X: number[]): PathEnd => ({ outcome, point: new Float64Array(X), residual: 0, condition: 1e12, windingNumber: 2, steps: 1, rejectedSteps: 0, retries: 0 });
+const end = (outcome: PathEnd['outcome'], X: number[], residual = 0): PathEnd => ({ outcome, point: new Float64Array(X), residual, condition: 1e12, windingNumber: 2, steps: 1, rejectedSteps: 0, retries: 0 });
 
 describe('toAffineEnd', () => {
   it('dehomogenises a finite end: x = X / h, and keeps a regular end that solves the target', () => {
@@ -35,10 +35,18 @@ describe('toAffineEnd', () => {
   it.each([
     ['near infinity (relative distance 1e-3 in the chart)', [1, 0, 1.5, 0, 1e-3, 0]],
     ['away from infinity and from the solution (2, 3)', [1, 0, 1, 0, 0.5, 0]],
-  ])('calls a regular verdict at a point that does not solve the target failed, %s', (_, X) => {
-    const e = toAffineEnd(end('regular', X), groups, units, tools);
+  ])('calls a regular verdict at a point that solves neither target failed, %s', (_, X) => {
+    const e = toAffineEnd(end('regular', X, 0.1), groups, units, tools);
     expect(e.outcome).toBe('failed');
     expect(e.failure).toBe('no-convergence');
+  });
+
+  it('calls a regular verdict at a root of the homogenised target whose dehomogenisation solves nothing at infinity', () => {
+    // xy = 1, xy = 2 have no finite solution (hand arithmetic); the homogenised pair has the root (1 : 0 : 0)
+    const parallel = createAffineTools(compileSystem({ unknowns: ['x', 'y'], parameters: [], equations: [sub(mul(x, y), 1), sub(mul(x, y), 2)] }), new Float64Array(0));
+    const e = toAffineEnd(end('regular', [1, 0, 1e-6, 0, 1e-9, 0], 1e-12), groups, units, parallel);
+    expect(e.outcome).toBe('at-infinity');
+    expect(e.direction).toBe(true);
   });
 
   it('keeps a regular end however far out it is, when it solves the target (x − 10⁹ = 0, y − 1 = 0)', () => {

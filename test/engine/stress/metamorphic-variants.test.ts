@@ -41,7 +41,7 @@ describe.each(rows)('$label', ({ family, seed }) => {
     expect({ found: outcome(report).found, failed: report.stats.failed }).toEqual({ found: family.expected, failed: 0 });
     expect(report.solutions.filter((s) => s.multiplicity !== 1)).toHaveLength(0);
     // where Bézout's count is exact, no path may end anywhere but at its own solution
-    if (bezoutExact) expect(outcome(report)).toEqual({ found: family.expected, regular: family.expected, singular: 0, atInfinity: 0, failed: 0 });
+    if (bezoutExact) expect(outcome(report)).toEqual({ found: family.expected, regular: family.expected, singular: 0, excess: 0, atInfinity: 0, failed: 0 });
   });
 
   it.each(CHANGES.slice(1))('$label: the solutions are exactly the base solutions mapped by the change', async (change) => {

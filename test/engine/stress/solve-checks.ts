@@ -17,22 +17,22 @@ export function solveOnce(s: StressSystem): Promise<SolveReport> {
 }
 
 /** The figures a failure message should show at once: distinct nonsingular found, and where the paths went. */
-export function outcome(report: SolveReport): { found: number; failed: number; singular: number; atInfinity: number; regular: number } {
-  const { failed, singular, atInfinity, regular } = report.stats;
-  return { found: report.solutions.length, failed, singular, atInfinity, regular };
+export function outcome(report: SolveReport): { found: number; failed: number; singular: number; excess: number; atInfinity: number; regular: number } {
+  const { failed, singular, excess, atInfinity, regular } = report.stats;
+  return { found: report.solutions.length, failed, singular, excess, atInfinity, regular };
 }
 
 /**
  * Every path of the start system is tracked and lands in exactly one place: the outcome counts add up to the Bézout
- * number, and the paths named by the solutions and singular clusters, with the at-infinity and failed ends, are each
- * path index exactly once.
+ * number, and the paths named by the solutions and singular clusters, with the excess, at-infinity and failed ends,
+ * are each path index exactly once.
  */
 export function expectEveryPathAccountedFor(report: SolveReport): void {
-  const { tracked, regular, singular, atInfinity, failed } = report.stats;
+  const { tracked, regular, singular, excess, atInfinity, failed } = report.stats;
   expect(tracked).toBe(report.bezoutBound);
   expect(report.ends).toHaveLength(tracked);
-  expect(regular + singular + atInfinity + failed).toBe(tracked);
-  const elsewhere = report.ends.flatMap((e, k) => (e.outcome === 'at-infinity' || e.outcome === 'failed' ? [k] : []));
+  expect(regular + singular + excess + atInfinity + failed).toBe(tracked);
+  const elsewhere = report.ends.flatMap((e, k) => (e.outcome === 'at-infinity' || e.outcome === 'failed' || e.outcome === 'excess' ? [k] : []));
   const named = [...report.solutions, ...report.singular].flatMap((s) => s.paths);
   expect([...named, ...elsewhere].sort((a, b) => a - b)).toEqual(Array.from({ length: tracked }, (_, k) => k));
 }
