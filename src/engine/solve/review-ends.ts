@@ -29,7 +29,8 @@ export interface PathReviewTools {
  * winding number 1, at the refined point. A 'failed' end, or a 'singular' end whose winding number was never determined
  * and whose local dimension is not 'isolated' (too ill-conditioned to decide in double precision), is re-tracked in
  * double-double precision (or, when that is unavailable, with the strictest double settings); the new end, reviewed
- * the same way, replaces it when it reached a verdict, and the end records the re-track (PathEnd.retrack). A path
+ * the same way, replaces it when it reached a verdict (an end resumed alone that stays undecided is re-tracked whole,
+ * in double-double with stricterSettings attempt 2), and the end records the re-track (PathEnd.retrack). A path
  * that fails again but whose last point passes the local dimension test is 'excess' too: the tracker followed it
  * onto the set ('failed' means only that the tracker could not follow a path).
  */
@@ -37,9 +38,15 @@ export function reviewEnd(end: PathEnd, k: number, tools: PathReviewTools): Path
   const first = classify(end, k, tools, false);
   if (!first.retrack) return settled(first.end);
   const reason = end.outcome === 'failed' ? 'failed' : 'undecided';
-  const retracked = tools.retrack(k, tools.extended ? { kind: 'extended', attempt: 0 } : { kind: 'strict', attempt: 3 }, end);
-  const again = classify(retracked, k, tools, true);
-  const retries = end.retries + 1 + retracked.retries;
+  let retracked = tools.retrack(k, tools.extended ? { kind: 'extended', attempt: 0 } : { kind: 'strict', attempt: 3 }, end);
+  let again = classify(retracked, k, tools, true);
+  let retries = end.retries + 1 + retracked.retries;
+  if (again.retrack && tools.extended) {
+    // the end alone did not settle it: the whole path again, in double-double with steps divided by 16
+    retracked = tools.retrack(k, { kind: 'extended', attempt: 2 });
+    again = classify(retracked, k, tools, true);
+    retries += 1 + retracked.retries;
+  }
   const precision = tools.extended ? 'double-double' : 'double';
   if (again.retrack) return settled({ ...first.end, retries, retrack: { reason, precision, changed: false } });
   return settled({ ...again.end, steps: end.steps + retracked.steps, rejectedSteps: end.rejectedSteps + retracked.rejectedSteps, retries, retrack: { reason, precision, changed: true } });

@@ -127,11 +127,14 @@ export function createCauchyEndgame(stepper: Stepper, probe?: InfinityProbe): (x
               lastWinding = 0;
               continue;
             }
-            if (check === 'unchecked') {
+            // in double precision the inward check reaches only radii of about 1e-13: a second branch point closer to the
+            // end than that goes unseen, so every estimate with c > 1 stays provisional until checked in extended precision
+            const provisional = check === 'unchecked' || (winding > 1 && s.precision !== 'double-double');
+            if (provisional) {
               result.sample.set(x);
               result.sampleRadius = r;
             }
-            result.provisional = check === 'unchecked';
+            result.provisional = provisional;
             x.set(estimate);
             // at infinity when the limit is, to within its accuracy, or when the samples' distances to infinity were
             // still falling steadily toward 0 (the loops' mean then carries the truncation of a diverging expansion)

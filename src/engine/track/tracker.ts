@@ -77,9 +77,10 @@ export function createTracker(homotopy: Homotopy, settings: Partial<TrackerSetti
       if (turned !== 'ok') return { status: turned, winding: 1, diverged: false };
     }
     const result = endgame(x, tEnd, 0, uRe, uIm, r0);
-    if (result.status === 'ok' && result.provisional && uIm === 0) {
-      provisionalSample.set(result.sample);
-      provisionalAt = tEnd + uRe * result.sampleRadius;
+    if (result.status === 'ok' && result.provisional) {
+      // on a turned ray the sample sits at complex t: resume from where the endgame began instead
+      provisionalSample.set(uIm === 0 ? result.sample : saved);
+      provisionalAt = uIm === 0 ? tEnd + uRe * result.sampleRadius : tE;
     }
     if (result.status === 'ok' && result.winding === 1 && !result.diverged) stepper.newton(x, tEnd, 0, s.finalTolerance, 6);
     return { status: result.status, winding: result.winding, diverged: result.diverged };
