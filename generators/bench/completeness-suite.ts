@@ -41,8 +41,8 @@ let run = 0;
 /**
  * Completeness checks on the conic ladder (Chasles 1864; Bashelor–Ksir–Traves 2008): recovery by monodromy loops and
  * the trace test on the 36-conic rung (compiled tangency-point system, this thread), and recovery by loops on the
- * five-conic problem with its hand-written homotopy module over two workers. The five-conic trace test is not here:
- * its pencil fibre (about 12 000 points with one conic moving) would take hours at the compiled system's speed.
+ * five-conic problem with its hand-written homotopy module over two workers. The five-conic trace test is not here: with
+ * one conic moving its pencil fibre passed 14 813 points in 250 000 paths (736 s) without saturating (engine README).
  */
 export const cases: BenchCase[] = [
   {

@@ -57,6 +57,7 @@ export interface LoopRecoveryReport extends PathCounts {
  * complex vertices and its own random gammas; every known solution goes around it, and any end not yet known
  * (relative 1e-8) is added and sent around too. Stops after `quietLoops` fruitless loops in a row or `maxLoops`.
  * Failed routes and jumps are counted; jumped routes are re-tracked with safe settings and dropped if they still meet.
+ * `solutions` must be in the coordinates of `compiled` (and of `track`, when given); throws RangeError when it is empty.
  */
 export async function recoverByLoops(compiled: CompiledEquations, parameters: Float64Array, solutions: readonly Float64Array[], options: LoopRecoveryOptions): Promise<LoopRecoveryReport> {
   const { n, np } = compiled;

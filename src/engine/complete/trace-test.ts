@@ -114,7 +114,8 @@ export interface TraceTestReport extends PathCounts {
  * those not in W are recovered (Newton on F at p₀). 'complete' needs a linear trace, every given solution met again,
  * no failed, singular or unclear end at λ = 0 and no unresolved jump. What it certifies: W ∪ recovered holds every
  * affine solution on the components of C that W reaches; for a family with an irreducible solution variety (transitive
- * monodromy) that is every solution at p₀. Systems without parameters get 'not-applicable'.
+ * monodromy) that is every solution at p₀. Systems without parameters get 'not-applicable'; an empty `solutions` throws
+ * RangeError.
  */
 export async function runTraceTest(system: PolynomialSystem, parameters: Float64Array, solutions: readonly Float64Array[], options: TraceTestOptions): Promise<TraceTestReport> {
   const n = system.unknowns.length, m = system.parameters.length;
