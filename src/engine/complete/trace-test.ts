@@ -14,7 +14,7 @@ import type { RecoveredSolution } from './recovered.ts';
 import { createTracePencil, type PencilHyperplane } from './trace-pencil.ts';
 
 /**
- * Default acceptance bound on the relative trace defect. Measured (engine README): complete pencil fibres 1e-17…5e-15
+ * Default acceptance bound on the relative trace defect. Measured (engine README): complete pencil fibres 1e-17…5e-14
  * (8–114 points) and 1.2e-13 (708 points); incomplete ones at least 1.5e-4 (8–40 points), 2.8e-6 (114), 1.8e-7 (550)
  * and 8.2e-7 (708). 1e-9 leaves ≥ 2 orders of magnitude on either side; accepted defects grow and refused ones shrink
  * with the fibre, so fibres far beyond 10³ points need it measured again.
