@@ -18,3 +18,8 @@ export { createAffineTools, type AffineTools } from './solve/affine.ts';
 export { sharedPool, closeSharedPool } from './pool/shared-pool.ts';
 export type { PathJob, TrackingPool } from './pool/job.ts';
 export { trackBatch, trackStarts } from './pool/track-batch.ts';
+export { recoverByLoops, type LoopRecoveryOptions, type LoopRecoveryReport, type LoopRecord } from './complete/recover-by-loops.ts';
+export { runTraceTest, TRACE_TOLERANCE, type TraceTestOptions, type TraceTestReport } from './complete/trace-test.ts';
+export type { RecoveredSolution } from './complete/recovered.ts';
+export type { FibreAtStart } from './complete/pencil-ends.ts';
+export type { PencilHyperplane } from './complete/trace-pencil.ts';

@@ -4,14 +4,30 @@ import type { ParameterLeg } from '../parameter/gamma-arc.ts';
 import { createPointIndex, type PointIndex } from '../parameter/point-index.ts';
 import { randomGamma, randomParameterPoint, reverseLeg, type LegTracker } from '../parameter/route.ts';
 
-/** Why discovery stopped: the known count was reached, a whole added node brought nothing new, or a budget ran out. */
-export type MonodromyStop = 'known-count' | 'saturated' | 'stalled' | 'path-budget' | 'node-budget';
+/**
+ * Why discovery stopped: the known count was reached, the caller's acceptance test passed, a whole added node brought
+ * nothing new, or a budget ran out.
+ */
+export type MonodromyStop = 'known-count' | 'accepted' | 'saturated' | 'stalled' | 'path-budget' | 'node-budget';
+
+/** Every node's parameters and solutions (packed complex), as handed to an acceptance test. */
+export interface MonodromyNodes {
+  readonly parameters: readonly Float64Array[];
+  readonly solutions: readonly (readonly Float64Array[])[];
+}
 
 /** What monodromy discovery needs: a leg tracker, a solution-first seed, a random source, and optional counts and budgets. */
 export interface MonodromyOptions {
   readonly track: LegTracker;
-  /** A start pair built solution-first: parameters (packed complex) and one solution for them. */
-  readonly seed: { readonly parameters: Float64Array; readonly solution: Float64Array };
+  /** A start pair built solution-first: parameters (packed complex) and one solution for them (or several: `solutions`). */
+  readonly seed: { readonly parameters: Float64Array; readonly solution?: Float64Array; readonly solutions?: readonly Float64Array[] };
+  /** Draws the parameters of a new node (default: randomParameterPoint, complex standard normal). */
+  readonly drawNode?: (random: RandomSource) => Float64Array;
+  /**
+   * Called whenever every known solution has travelled every edge (the graph is saturated), before a node is added:
+   * true stops discovery with 'accepted' (a trace test, say).
+   */
+  readonly accept?: (nodes: MonodromyNodes) => boolean;
   readonly random: RandomSource;
   /** The published generic count, when known: discovery stops as soon as one node holds that many. */
   readonly expected?: number;
@@ -69,7 +85,10 @@ interface Task { readonly edge: number; readonly reversed: boolean; readonly sta
  */
 export async function discoverByMonodromy(options: MonodromyOptions): Promise<MonodromyResult> {
   const { track, seed, random, expected } = options;
-  const n = seed.solution.length / 2, np = seed.parameters.length / 2;
+  const seedSolutions = seed.solutions ?? (seed.solution ? [seed.solution] : []);
+  if (seedSolutions.length === 0) throw new RangeError('monodromy discovery needs a seed solution');
+  const n = seedSolutions[0]!.length / 2, np = seed.parameters.length / 2;
+  const drawNode = options.drawNode ?? ((r: RandomSource) => randomParameterPoint(np, r));
   const tolerance = options.tolerance ?? 1e-8;
   const maxPaths = options.maxPaths ?? (expected !== undefined ? 40 * expected : 100_000);
   const stallPaths = options.stallPaths ?? (expected !== undefined ? Infinity : 2000);
@@ -90,7 +109,7 @@ export async function discoverByMonodromy(options: MonodromyOptions): Promise<Mo
     }
   };
   addNode(seed.parameters, 0, []);
-  for (let k = 0; k < (options.extraNodes ?? 1); k++) addNode(randomParameterPoint(np, random), options.edgesPerPair ?? 4, nodes.map((_, i) => i));
+  for (let k = 0; k < (options.extraNodes ?? 1); k++) addNode(drawNode(random), options.edgesPerPair ?? 4, nodes.map((_, i) => i));
   const tried = new Set<string>();
   const addSolution = (node: number, x: Float64Array): number => {
     const j = nodes[node]!.index.add(x);
@@ -100,7 +119,7 @@ export async function discoverByMonodromy(options: MonodromyOptions): Promise<Mo
     });
     return j;
   };
-  addSolution(0, seed.solution);
+  for (const x of seedSolutions) if (nodes[0]!.index.find(x) < 0) addSolution(0, x);
   let paths = 0, failedPaths = 0, jumps = 0, unresolvedJumps = 0, rounds = 0, sinceNew = 0;
   const steps: number[] = [];
   const best = (): number => nodes.reduce((b, node, i) => (node.index.size > nodes[b]!.index.size ? i : b), 0);
@@ -108,12 +127,13 @@ export async function discoverByMonodromy(options: MonodromyOptions): Promise<Mo
   const done = (): MonodromyStop | null => {
     if (expected !== undefined && nodes[best()]!.index.size >= expected) return 'known-count';
     if (queue.length === 0) {
+      if (options.accept?.({ parameters: nodes.map((v) => v.parameters), solutions: nodes.map((v) => v.index.points) })) return 'accepted';
       const most = nodes[best()]!.index.size;
       fruitless = most === countWhenAdded ? fruitless + 1 : 0;
       if (fruitless >= (options.confirmations ?? 2)) return 'saturated';
       if (nodes.length >= (options.maxNodes ?? 6)) return 'node-budget';
       countWhenAdded = most;
-      addNode(randomParameterPoint(np, random), options.joinEdges ?? 1, [0, 1]);
+      addNode(drawNode(random), options.joinEdges ?? 1, [0, 1]);
     }
     if (sinceNew >= stallPaths) return 'stalled';
     if (paths >= maxPaths) return 'path-budget';

@@ -40,3 +40,25 @@ describe('monodromy discovery (Duff et al., IMA J. Numer. Anal. 39, 2019)', () =
     expect(result.stats.paths).toBeLessThanOrEqual(2 * 4 * result.stats.edges);
   });
 });
+
+describe('monodromy discovery with a caller’s seed set, nodes and acceptance test', () => {
+  it('starts from several solutions, draws nodes as told, and stops when the acceptance test passes', async () => {
+    // x⁴ + 2x − 3 = (x − 1)(x³ + x² + x + 3): the root x = 1 is given twice (kept once); the other three are found.
+    const track = await createModuleLegTracker({ url: COMPILED_LEG_MODULE, constants: { source: quartic.source, shape: { neq: 1, n: 1, np: 2 } } });
+    const parameters = Float64Array.of(2, 0, -3, 0);
+    const drawn: Float64Array[] = [];
+    const sizes: number[][] = [];
+    const result = await discoverByMonodromy({
+      track, random: createRandom(8), seed: { parameters, solutions: [Float64Array.of(1, 0), Float64Array.of(1, 0)] },
+      drawNode: (r) => { const q = Float64Array.of(r.normal(), r.normal(), r.normal(), r.normal()); drawn.push(q); return q; },
+      accept: (nodes) => { sizes.push(nodes.solutions.map((s) => s.length)); return nodes.solutions[0]!.length === 4; },
+    });
+    expect(result.stop).toBe('accepted');
+    expect(result.solutions).toHaveLength(4);
+    expect(sizes.length).toBeGreaterThan(0);
+    // At each saturation every node holds the same number of roots (each edge is a bijection), and the seed's
+    // duplicate was counted once.
+    for (const s of sizes) expect(new Set(s).size).toBe(1);
+    expect(drawn.length).toBe(result.stats.nodes - 1);
+  });
+});
