@@ -1,5 +1,5 @@
 import type { InstanceDefinition, ProblemDefinition } from '../../src/atlas/definition.ts';
-import type { InstanceResult, PathStats, Solution } from '../../src/atlas/record.ts';
+import type { Completeness, InstanceResult, PathStats, Solution } from '../../src/atlas/record.ts';
 import type { PolynomialSystem } from '../../src/engine/expr/node.ts';
 import { coordinatesOf, isRealValues } from './coordinates-of.ts';
 import type { EngineReport, EngineServices } from './engine-services.ts';
@@ -30,11 +30,14 @@ export interface InstanceRun {
 export async function assembleInstance(run: InstanceRun, engine: EngineServices): Promise<{ result: InstanceResult; seconds: number }> {
   const { definition, instance, report, where } = run;
   const realParameters = run.parameters.every((v, k) => k % 2 === 0 || v === 0);
-  const points = report.solutions.map((s) => s.point);
+  const checks = engine.complete ? await engine.complete(run.system, run.parameters, report.solutions.map((s) => s.point), { seed: run.seed, workers: run.workers }) : null;
+  // solutions the completeness checks recovered follow the solve's own, in the order they were found
+  const found = [...report.solutions, ...(checks?.recovered ?? [])];
+  const points = found.map((s) => s.point);
   const verdict = await engine.certify(run.system, run.parameters, points, run.workers === undefined ? { realParameters } : { realParameters, workers: run.workers });
   const names = definition.formulation.parameters;
   const parameters = Object.fromEntries(names.map((n, j) => [n, [run.parameters[2 * j]!, run.parameters[2 * j + 1]!] as [number, number]]));
-  const solutions: Solution[] = report.solutions.map((s, i) => {
+  const solutions: Solution[] = found.map((s, i) => {
     const values = coordinatesOf(definition, s.point, where);
     const v = verdict.solutions[i] ?? { certified: false, certifiedReal: false };
     return {
@@ -58,7 +61,7 @@ export async function assembleInstance(run: InstanceRun, engine: EngineServices)
     certifiedDistinct: verdict.certifiedDistinct,
     real: solutions.filter((s) => s.real).length,
     certifiedReal: verdict.certifiedReal,
-    complete: instance.kind === 'generic' && trueCount !== null && verdict.certifiedDistinct === trueCount,
+    ...completeFlags(instance.kind, trueCount, verdict.certifiedDistinct, solutions.length, checks?.checks.trace.verdict),
   };
   const st = report.stats;
   const paths: PathStats = {
@@ -80,9 +83,29 @@ export async function assembleInstance(run: InstanceRun, engine: EngineServices)
     paths: roundNumbers(paths),
     solutions: rounded,
     figure: roundNumbers(figureOf(definition, roundedParameters, realSolutions, where)),
-    notes: [...pathNotes(counts, paths, instance.kind), ...sharedEnds(report)],
+    notes: [...pathNotes(counts, paths, instance.kind), ...sharedEnds(report), ...recoveredNotes(checks?.checks)],
+    ...(checks ? { completeness: roundNumbers(checks.checks) } : {}),
   };
-  return { result, seconds: report.seconds + verdict.seconds };
+  return { result, seconds: report.seconds + verdict.seconds + (checks?.seconds ?? 0) };
+}
+
+/**
+ * Whether the generic instance is complete, and by what: the published count (certified distinct equals it) or,
+ * without one, the trace test (its verdict 'complete' and every found solution certified distinct).
+ */
+export function completeFlags(kind: 'generic' | 'demo', trueCount: number | null, certifiedDistinct: number, found: number, trace: string | undefined): { complete: boolean; completeBy: 'published count' | 'trace test' | null } {
+  if (kind !== 'generic') return { complete: false, completeBy: null };
+  if (trueCount !== null) return certifiedDistinct === trueCount ? { complete: true, completeBy: 'published count' } : { complete: false, completeBy: null };
+  return trace === 'complete' && found > 0 && certifiedDistinct === found ? { complete: true, completeBy: 'trace test' } : { complete: false, completeBy: null };
+}
+
+/** Notes on solutions the completeness checks found after the solve. */
+function recoveredNotes(checks: Completeness | undefined): string[] {
+  if (!checks) return [];
+  const notes: string[] = [];
+  if (checks.recovery.recovered > 0) notes.push(`${checks.recovery.recovered} solution${checks.recovery.recovered === 1 ? '' : 's'} recovered by monodromy loops after the solve`);
+  if (checks.trace.recovered > 0) notes.push(`${checks.trace.recovered} solution${checks.trace.recovered === 1 ? '' : 's'} recovered by the trace test's completed fibre`);
+  return notes;
 }
 
 /** A note when distinct nonsingular solutions were reached by more than one path (a sign of path jumping). */

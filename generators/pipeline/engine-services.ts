@@ -1,7 +1,7 @@
 import type { PathEnd } from '../../src/engine/homotopy.ts';
 import type { PolynomialSystem } from '../../src/engine/expr/node.ts';
 import type { ProblemDefinition } from '../../src/atlas/definition.ts';
-import type { RetrackStats } from '../../src/atlas/record.ts';
+import type { Completeness, RetrackStats } from '../../src/atlas/record.ts';
 
 /** One distinct solution the engine reports (H1's FoundSolution): packed complex point in the unknowns. */
 export interface EngineSolution {
@@ -77,6 +77,13 @@ export interface CertifyReport {
   readonly seconds: number;
 }
 
+/** What the completeness checks found: solutions the solve missed (refined, in the unknowns) and the record's block. */
+export interface CompletenessReport {
+  readonly recovered: readonly { readonly point: Float64Array; readonly residual: number; readonly condition: number }[];
+  readonly checks: Completeness;
+  readonly seconds: number;
+}
+
 /**
  * Everything the pipeline needs from the engine, injected so tests can use a small fake and production wires the
  * real engine (generators/pipeline/real-engine.ts): strategies by SolverChoice kind, certification, shard merging.
@@ -88,6 +95,11 @@ export interface EngineServices {
   readonly certify: (system: PolynomialSystem, parameters: Float64Array, points: Float64Array[], options: { realParameters: boolean; workers?: number }) => Promise<CertifyReport> | CertifyReport;
   /** The last step of a sharded solve: the ends of every shard, in path order, into the report a single run gives (seed: the instance's). */
   readonly collect: (system: PolynomialSystem, parameters: Float64Array, ends: readonly PathEnd[], bounds: SolveBounds, seed: number) => Promise<EngineReport> | EngineReport;
+  /**
+   * Optional: the completeness checks after a solve (monodromy recovery, trace test) on the found nonsingular
+   * solutions; absent in engines without them (the record then carries no completeness block).
+   */
+  readonly complete?: (system: PolynomialSystem, parameters: Float64Array, points: readonly Float64Array[], options: { seed: number; workers?: number }) => Promise<CompletenessReport>;
   /** Ends any worker threads the engine started (the CLI calls it once a command is done); absent when there are none. */
   readonly close?: () => Promise<void>;
 }

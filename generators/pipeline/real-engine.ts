@@ -45,9 +45,11 @@ export async function loadEngine(): Promise<EngineServices> {
       },
     },
   };
+  const [engineSurface, { completenessChecks }] = await Promise.all([import('../../src/engine/index.ts'), import('./completeness-checks.ts')]);
   return {
     version: ENGINE_VERSION,
     strategies,
+    complete: (system, parameters, points, { seed }) => completenessChecks(engineSurface, system, parameters, points, seed),
     certify: (system, parameters, points, { workers, ...options }) =>
       workers ? certifySolutionsParallel(system, parameters, points, { ...options, workers }) : certifySolutions(system, parameters, points, options),
     collect: (system, parameters, ends, bounds, seed) => finishSolve(system, parameters, ends, { ...bounds }, seed),

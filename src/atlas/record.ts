@@ -66,9 +66,41 @@ export const countsSchema = z.object({
   certifiedDistinct: z.number().int().nonnegative(),
   real: z.number().int().nonnegative(),
   certifiedReal: z.number().int().nonnegative(),
-  /** True only when certifiedDistinct equals the published generic count; completeness then rests on that count. */
+  /**
+   * True only for a generic instance whose certified distinct solutions are all its solutions: by the published
+   * count (certifiedDistinct equals it) or, where no count is published, by the trace test (every found solution
+   * certified distinct and the trace test's verdict 'complete'); `completeBy` says which.
+   */
   complete: z.boolean(),
+  completeBy: z.enum(['published count', 'trace test']).nullable().default(null),
 });
+
+/** Monodromy recovery after the solve (loops seeded with the found solutions; see src/engine/complete). */
+export const recoveryCheckSchema = z.object({
+  /** 'saturated': quiet loops ran out; 'loop-budget': stopped by the loop budget; 'not-applicable': no parameters; 'skipped': too large for the budget. */
+  verdict: z.enum(['saturated', 'loop-budget', 'not-applicable', 'skipped']),
+  loops: z.number().int().nonnegative(),
+  paths: z.number().int().nonnegative(),
+  failedPaths: z.number().int().nonnegative(),
+  /** Solutions the loops found that the solve had missed (they are among `solutions`). */
+  recovered: z.number().int().nonnegative(),
+});
+
+/** The trace test (Leykin–Rodriguez–Sottile 2018) on the found set; see src/engine/complete/trace-test.ts. */
+export const traceCheckSchema = z.object({
+  /** 'complete': the trace is linear over a completed pencil fibre; 'incomplete': not confirmed (not linear, or budget spent). */
+  verdict: z.enum(['complete', 'incomplete', 'not-applicable', 'skipped']),
+  reason: z.string(),
+  /** The relative trace defect (null when none was measured). */
+  defect: z.number().nonnegative().nullable(),
+  /** Points of the pencil fibre reached. */
+  fibre: z.number().int().nonnegative(),
+  paths: z.number().int().nonnegative(),
+  recovered: z.number().int().nonnegative(),
+});
+
+/** The completeness checks of one instance that need no published count. */
+export const completenessSchema = z.object({ recovery: recoveryCheckSchema, trace: traceCheckSchema });
 
 /** The solve of one instance of a problem. */
 export const instanceResultSchema = z.object({
@@ -85,6 +117,8 @@ export const instanceResultSchema = z.object({
   figure: figureSchema.nullable(),
   /** Plain-language notes the engine produced (why a count falls short, what was retried). */
   notes: z.array(z.string()),
+  /** Completeness checks without a published count (absent in records written before they existed). */
+  completeness: completenessSchema.optional(),
 });
 
 /** One entry of a record's history: when it was replaced, by which engine, and what changed. */
@@ -125,6 +159,7 @@ export type Solution = z.infer<typeof solutionSchema>;
 export type PathStats = z.infer<typeof pathStatsSchema>;
 export type RetrackStats = z.infer<typeof retrackStatsSchema>;
 export type Counts = z.infer<typeof countsSchema>;
+export type Completeness = z.infer<typeof completenessSchema>;
 export type InstanceResult = z.infer<typeof instanceResultSchema>;
 export type HistoryEntry = z.infer<typeof historyEntrySchema>;
 export type SolveRecord = z.infer<typeof solveRecordSchema>;

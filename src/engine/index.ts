@@ -15,6 +15,7 @@ export { planHomotopy, type HomotopyPlan } from './start/plan.ts';
 export { solveSystem, shardRange, collectSolutions, isRealPoint, bezoutBound, multihomogeneousBound } from './solve/solve-system.ts';
 export type { SolveOptions, FoundSolution, PathStatistics, SolveReport, SolveBounds } from './solve/types.ts';
 export { createAffineTools, type AffineTools } from './solve/affine.ts';
+export { naturalUnits } from './start/natural-units.ts';
 export { sharedPool, closeSharedPool } from './pool/shared-pool.ts';
 export type { PathJob, TrackingPool } from './pool/job.ts';
 export { trackBatch, trackStarts } from './pool/track-batch.ts';
