@@ -3,6 +3,8 @@ import type { Figure, FigureItem } from '../atlas/figure.ts';
 import { clipLine, clipPolyline, type Point } from './clip.ts';
 import { conicPath } from './conic-path.ts';
 import { expandWindow, windowScales } from './world-window.ts';
+import { axisTicks, type Tick } from './axis-ticks.ts';
+import { MARGIN, POINT_RADIUS } from './figure-constants.ts';
 
 /** One SVG element of a figure, in screen coordinates (2 decimals): a <circle> or a <path>. */
 export interface SceneItem {
@@ -22,15 +24,11 @@ export interface Scene {
   readonly omittedSolutions: number;
   readonly height: number;
   readonly layers: { readonly name: string; readonly items: SceneItem[] }[];
-  readonly xTicks: { readonly at: number; readonly value: number }[];
-  readonly yTicks: { readonly at: number; readonly value: number }[];
+  readonly xTicks: Tick[];
+  readonly yTicks: Tick[];
 }
 
-/** Radius in px of a drawn point (the page keeps it on screen at any zoom). */
-export const POINT_RADIUS = 4.5;
-
-/** Curves are drawn beyond the window by this fraction of its size on every side, so panning and zooming out show more. */
-export const MARGIN = 0.5;
+export { MARGIN, POINT_RADIUS };
 
 /** Largest distance in px between a drawn conic and the true one at the figure's own scale. */
 export const CURVE_TOLERANCE = 0.02;
@@ -111,7 +109,6 @@ export function figureScene(figure: Figure, width = 640, maxSolutions = 200): Sc
     drawnSolutions: kept.size,
     omittedSolutions: solutionIds.length - kept.size,
     layers: [...layers].map(([name, items]) => ({ name, items })),
-    xTicks: x.ticks(6).map((v) => ({ at: round2(x(v)), value: v })).filter((t) => t.at > 12 && t.at < width - 12),
-    yTicks: y.ticks(6).map((v) => ({ at: round2(y(v)), value: v })).filter((t) => t.at > 12 && t.at < height - 12),
+    ...axisTicks(x, y, width, height),
   };
 }

@@ -136,8 +136,8 @@ describe('problem page', () => {
     };
     expect(doc.coordinates.length).toBeGreaterThan(0);
     for (const inst of doc.instances) {
-      const rows = await page.locator(`table[data-solutions="${inst.id}"] tbody tr`).count();
-      expect(rows).toBe(Math.min(64, inst.solutions.length));
+      const rows = await page.locator(`solutions-table[data-instance="${inst.id}"] tbody tr`).count();
+      expect(rows).toBe(Math.min(100, inst.solutions.length));
       for (const s of inst.solutions) expect(Object.keys(s.values)).toEqual(doc.coordinates);
     }
     await page.close();
