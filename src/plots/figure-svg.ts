@@ -2,7 +2,7 @@ import type { Scene, SceneItem } from './figure-scene.ts';
 import type { WorldWindow } from './world-window.ts';
 import { layerClass, layerLabel } from './layer-names.ts';
 import { gridSvg } from './axis-ticks.ts';
-import { escapeHtml } from '../site/inline-tex.ts';
+import { escapeHtml } from '../site/escape-html.ts';
 
 /** How to write a figure's SVG: its id (for the clip path), what labels it, and the standalone extras. */
 export interface FigureSvgOptions {
