@@ -29,5 +29,5 @@ export async function mergeCommand(args: readonly string[], ctx: CommandContext)
   const loaded = await loadTarget(parts[0]!.target, ctx.problemsDir);
   const solved = await mergeParts(loaded, await ctx.loadEngine(), parts);
   ctx.stdout.write(values.json ? `${JSON.stringify(jsonSummary(solved.record, solved.seconds))}\n` : textSummary(solved.record, solved.seconds));
-  return reportPublished(ctx, solved.record.slug, publish(contentRoot(values.content), solved.record, { force: Boolean(values.force) }));
+  return reportPublished(ctx, solved.record.slug, publish(contentRoot(values.content), solved.record, { force: Boolean(values.force) }, solved.sidecars));
 }

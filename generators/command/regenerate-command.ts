@@ -26,6 +26,6 @@ export async function regenerateCommand(args: readonly string[], ctx: CommandCon
     const loaded = await loadTarget(target, ctx.problemsDir);
     const solved = await solveWithProgress(ctx, engine, loaded, { workers });
     ctx.stdout.write(textSummary(solved.record, solved.seconds));
-    return reportPublished(ctx, loaded.definition.slug, publish(root, solved.record, { force: Boolean(values.force) }));
+    return reportPublished(ctx, loaded.definition.slug, publish(root, solved.record, { force: Boolean(values.force) }, solved.sidecars));
   });
 }

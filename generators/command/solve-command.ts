@@ -43,6 +43,6 @@ export async function solveCommand(args: readonly string[], ctx: CommandContext)
   if (values.json) ctx.stdout.write(`${JSON.stringify(jsonSummary(solved.record, solved.seconds))}\n`);
   else ctx.stdout.write(textSummary(solved.record, solved.seconds));
   if (!values.write) return EXIT.ok;
-  const outcome = publish(contentRoot(values.content), solved.record, { force: Boolean(values.force) });
+  const outcome = publish(contentRoot(values.content), solved.record, { force: Boolean(values.force) }, solved.sidecars);
   return reportPublished(ctx, solved.record.slug, outcome);
 }

@@ -53,7 +53,7 @@ describe('figureScene', () => {
     expect(d).toMatch(/^M[\d.]+,[\d.]+(C[-\d.]+,[-\d.]+,[-\d.]+,[-\d.]+,[-\d.]+,[-\d.]+)+Z$/);
     expect(d).not.toMatch(/\.\d{3}/);
     const numbers = d.slice(1, -1).split(/[C,]/).map(Number);
-    const start: [number, number] = [numbers[0]!, numbers[1]!];
+    const start: readonly [number, number] = [numbers[0]!, numbers[1]!];
     const cubics: Cubic[] = [];
     for (let k = 2, p = start; k < numbers.length; k += 6) {
       const c: Cubic = [p, [numbers[k]!, numbers[k + 1]!], [numbers[k + 2]!, numbers[k + 3]!], [numbers[k + 4]!, numbers[k + 5]!]];
