@@ -49,6 +49,7 @@ class PlaneFigure extends HTMLElement {
     select(svg).call(behaviour).on('dblclick.zoom', null);
     this.#zoom = behaviour;
     frame.tabIndex = 0;
+    frame.setAttribute('role', 'group');
     frame.setAttribute('aria-label', 'Figure: arrow keys pan, plus and minus zoom, 0 resets the view');
     frame.addEventListener('keydown', (e) => this.#key(e));
     for (const button of this.querySelectorAll<HTMLButtonElement>('button[data-toggle-layer]')) {
