@@ -30,7 +30,7 @@ export async function mergeCommand(args: readonly string[], ctx: CommandContext)
   const loaded = await loadTarget(parts[0]!.target, ctx.problemsDir);
   const solved = await mergeParts(loaded, await ctx.loadEngine(), parts);
   ctx.stdout.write(values.json ? `${JSON.stringify(jsonSummary(solved.record, solved.seconds))}\n` : textSummary(solved.record, solved.seconds));
-  const published = reportPublished(ctx, solved.record.slug, publish(contentRoot(values.content), solved.record, { force: Boolean(values.force) }));
+  const published = reportPublished(ctx, solved.record.slug, publish(contentRoot(values.content), solved.record, { force: Boolean(values.force) }, solved.sidecars));
   const short = shortfallLines(solved.record);
   for (const line of short) ctx.stderr.write(`${line} — published, not as complete\n`);
   return Math.max(published, short.length > 0 ? EXIT.failed : EXIT.ok);

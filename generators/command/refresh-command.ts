@@ -34,7 +34,7 @@ export async function refreshCommand(args: readonly string[], ctx: CommandContex
     engine ??= await ctx.loadEngine();
     const result = await solveWithProgress(ctx, engine, loaded, { workers });
     solved++;
-    return reportPublished(ctx, loaded.definition.slug, publish(root, result.record));
+    return reportPublished(ctx, loaded.definition.slug, publish(root, result.record, {}, result.sidecars));
   });
   ctx.stderr.write(`refresh: ${all.length} problems, ${solved} re-solved, ${all.length - solved} fresh\n`);
   return code;

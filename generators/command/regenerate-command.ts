@@ -29,7 +29,7 @@ export async function regenerateCommand(args: readonly string[], ctx: CommandCon
     const loaded = await loadTarget(target, ctx.problemsDir);
     const solved = await solveWithProgress(ctx, engine, loaded, { workers });
     ctx.stdout.write(textSummary(solved.record, solved.seconds));
-    const published = reportPublished(ctx, loaded.definition.slug, publish(root, solved.record, { force: Boolean(values.force) }));
+    const published = reportPublished(ctx, loaded.definition.slug, publish(root, solved.record, { force: Boolean(values.force) }, solved.sidecars));
     const short = shortfallLines(solved.record);
     for (const line of short) ctx.stderr.write(`${line} — published, not as complete\n`);
     return Math.max(published, short.length > 0 ? EXIT.failed : EXIT.ok);

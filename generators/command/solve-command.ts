@@ -48,6 +48,6 @@ export async function solveCommand(args: readonly string[], ctx: CommandContext)
   for (const line of short) ctx.stderr.write(`${line}\n`);
   const solveCode = short.length > 0 ? EXIT.failed : EXIT.ok;
   if (!values.write) return solveCode;
-  const outcome = publish(contentRoot(values.content), solved.record, { force: Boolean(values.force) });
+  const outcome = publish(contentRoot(values.content), solved.record, { force: Boolean(values.force) }, solved.sidecars);
   return Math.max(solveCode, reportPublished(ctx, solved.record.slug, outcome));
 }

@@ -6,6 +6,7 @@ import type { EngineReport, EngineServices } from './engine-services.ts';
 import { figureOf } from './figure-of.ts';
 import { pathNotes } from './path-notes.ts';
 import { roundNumbers } from './round-numbers.ts';
+import { instanceSidecar, type InstanceSidecar } from './sidecars-of.ts';
 
 /** The inputs of one instance's record entry: what was solved, with which seed and strategy, and the engine's report. */
 export interface InstanceRun {
@@ -25,9 +26,10 @@ export interface InstanceRun {
  * Certifies the engine's solutions and assembles the instance's record entry, rounded to the record's fixed digits:
  * values in the definition's coordinates (multiplicity 1: they are nonsingular), realness judged on them (|im| ≤ 1e-8·(1+|re|)), certification per
  * solution, the count ladder (complete only for a generic instance whose certified distinct count equals the
- * published count), path statistics, notes and the figure. Returns the seconds spent solving and certifying too.
+ * published count), path statistics, notes and the figure. Returns the seconds spent solving and certifying too, and
+ * the instance's sidecar (expanded equations with the exact parameters, certificate boxes) for the files beside the record.
  */
-export async function assembleInstance(run: InstanceRun, engine: EngineServices): Promise<{ result: InstanceResult; seconds: number }> {
+export async function assembleInstance(run: InstanceRun, engine: EngineServices): Promise<{ result: InstanceResult; seconds: number; sidecar: InstanceSidecar }> {
   const { definition, instance, report, where } = run;
   const realParameters = run.parameters.every((v, k) => k % 2 === 0 || v === 0);
   const checks = engine.complete ? await engine.complete(run.system, run.parameters, report.solutions.map((s) => s.point), { seed: run.seed, workers: run.workers }) : null;
@@ -86,7 +88,7 @@ export async function assembleInstance(run: InstanceRun, engine: EngineServices)
     notes: [...pathNotes(counts, paths, instance.kind), ...sharedEnds(report), ...recoveredNotes(checks?.checks)],
     ...(checks ? { completeness: roundNumbers(checks.checks) } : {}),
   };
-  return { result, seconds: report.seconds + verdict.seconds + (checks?.seconds ?? 0) };
+  return { result, seconds: report.seconds + verdict.seconds + (checks?.seconds ?? 0), sidecar: instanceSidecar(instance.id, run.system, run.parameters, verdict) };
 }
 
 /**

@@ -18,6 +18,7 @@ export function buildRecord(loaded: LoadedDefinition, engineVersion: string, ins
     caution: d.caution ?? null,
     trueCount: d.trueCount.value,
     source: d.trueCount.source,
+    ...(d.ladders ? { ladders: d.ladders.map((l) => ({ ...l })) } : {}),
     formulation: {
       unknowns: [...f.unknowns],
       parameters: [...f.parameters],

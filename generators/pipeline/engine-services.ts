@@ -70,7 +70,8 @@ export interface SolveStrategy {
 
 /** The certifier's verdict (H5's certifySolutions). */
 export interface CertifyReport {
-  readonly solutions: readonly { readonly certified: boolean; readonly certifiedReal: boolean }[];
+  /** Per solution; `box` (4 numbers per unknown: reLo, reHi, imLo, imHi) is where Krawczyk's test passed, when reported. */
+  readonly solutions: readonly { readonly certified: boolean; readonly certifiedReal: boolean; readonly box?: Float64Array }[];
   readonly certified: number;
   readonly certifiedDistinct: number;
   readonly certifiedReal: number;

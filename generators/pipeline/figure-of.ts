@@ -27,7 +27,7 @@ export function figureOf(
   for (const s of realSolutions) {
     for (const item of call('solution', () => drawing.solution(s.values, real))) items.push({ ...item, solution: s.index });
   }
-  const parsed = figureSchema.safeParse({ window: call('window', () => drawing.window(real, items)), items });
+  const parsed = figureSchema.safeParse({ window: call('window', () => drawing.window(real, items)), items, ...(drawing.projection ? { projection: drawing.projection } : {}) });
   if (!parsed.success) {
     const issue = parsed.error.issues[0]!;
     throw new AtlasError('input', `${where}: drawing: produced an invalid figure at ${issue.path.join('.')}: ${issue.message}`);

@@ -8,6 +8,7 @@ import { displayPath, type LoadedDefinition } from './load-definition.ts';
 import type { SolvePart } from './part-file.ts';
 import { instanceParameters, runEngine, type SolvedProblem } from './solve-problem.ts';
 import { strategyFor } from './strategy-for.ts';
+import { problemSidecars, type InstanceSidecar } from './sidecars-of.ts';
 
 /**
  * Merges the parts of one sharded solve into the record a single run gives: checks that the parts agree (target,
@@ -26,6 +27,7 @@ export async function mergeParts(loaded: LoadedDefinition, engine: EngineService
   const strategy = strategyFor(loaded.definition, engine, displayPath(loaded.file));
   const results: InstanceResult[] = [];
   const seconds: number[] = [];
+  const sidecars: InstanceSidecar[] = [];
   for (const [j, head] of first.instances.entries()) {
     const known = loaded.definition.instances.find((i) => i.id === head.id);
     if (!known) throw new AtlasError('input', `merge: instance "${head.id}" is not in the definition`);
@@ -39,6 +41,7 @@ export async function mergeParts(loaded: LoadedDefinition, engine: EngineService
     const done = await runEngine(where, () => assembleInstance(run, engine));
     results.push(done.result);
     seconds.push(done.seconds);
+    sidecars.push(done.sidecar);
   }
-  return { record: buildRecord(loaded, engine.version, results), seconds };
+  return { record: buildRecord(loaded, engine.version, results), seconds, sidecars: problemSidecars(loaded.definition.slug, loaded.system, sidecars) };
 }

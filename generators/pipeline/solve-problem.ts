@@ -7,6 +7,7 @@ import { buildRecord } from './build-record.ts';
 import type { EngineProgress, EngineReport, EngineServices } from './engine-services.ts';
 import { displayPath, type LoadedDefinition } from './load-definition.ts';
 import { strategyFor } from './strategy-for.ts';
+import { problemSidecars, type InstanceSidecar, type ProblemSidecars } from './sidecars-of.ts';
 
 /** Options of one solve: a seed replacing every instance's seed, worker count, and a progress callback. */
 export interface SolveOptions {
@@ -15,10 +16,11 @@ export interface SolveOptions {
   readonly onProgress?: (instance: InstanceDefinition, progress: EngineProgress) => void;
 }
 
-/** A solved problem: its record (no history yet) and the seconds each instance took (solve + certify). */
+/** A solved problem: its record (no history yet), the seconds each instance took (solve + certify), and its sidecar files. */
 export interface SolvedProblem {
   readonly record: SolveRecord;
   readonly seconds: readonly number[];
+  readonly sidecars: ProblemSidecars;
 }
 
 /** The parameters of an instance with the effective seed, errors naming the definition file and field. */
@@ -48,6 +50,7 @@ export async function solveProblem(loaded: LoadedDefinition, engine: EngineServi
   const strategy = strategyFor(loaded.definition, engine, displayPath(loaded.file));
   const results: InstanceResult[] = [];
   const seconds: number[] = [];
+  const sidecars: InstanceSidecar[] = [];
   for (const original of loaded.definition.instances) {
     const instance = options.seed === undefined ? original : { ...original, seed: options.seed };
     const where = `${displayPath(loaded.file)}: instance "${instance.id}"`;
@@ -60,6 +63,7 @@ export async function solveProblem(loaded: LoadedDefinition, engine: EngineServi
     const done = await runEngine(where, () => assembleInstance(run, engine));
     results.push(done.result);
     seconds.push(done.seconds);
+    sidecars.push(done.sidecar);
   }
-  return { record: buildRecord(loaded, engine.version, results), seconds };
+  return { record: buildRecord(loaded, engine.version, results), seconds, sidecars: problemSidecars(loaded.definition.slug, loaded.system, sidecars) };
 }

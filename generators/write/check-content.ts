@@ -7,11 +7,13 @@ import { formatIssues } from '../../src/atlas/validation-issue.ts';
 import { displayPath } from '../pipeline/load-definition.ts';
 import { pagePath, recordPath } from './content-paths.ts';
 import { readFrontmatter, renderPage } from './render-page.ts';
+import { checkSidecars } from './check-sidecars.ts';
 
 /**
  * Every problem with content under the root, checked: each record parses and fits the schema with the slug of its
  * file name; each page's frontmatter fits its schema and the page is exactly what its record renders to; no page
- * lacks a record and no record lacks a page. Returns one message per problem (file, field path, why) and the slugs.
+ * lacks a record and no record lacks a page; the files beside the records agree with them (checkSidecars). Returns
+ * one message per problem (file, field path, why) and the slugs.
  */
 export function checkContent(root: string): { errors: string[]; slugs: string[] } {
   const errors: string[] = [];
@@ -35,6 +37,7 @@ export function checkContent(root: string): { errors: string[]; slugs: string[] 
     else if (record && renderPage(record) !== text) errors.push(`${displayPath(file)}: differs from what its record renders (run refresh to rewrite it)`);
   }
   for (const slug of records.keys()) if (!pages.includes(slug)) errors.push(`${displayPath(recordPath(root, slug))}: has no page ${displayPath(pagePath(root, slug))} (run refresh)`);
+  errors.push(...checkSidecars(root, records));
   return { errors, slugs: [...records.keys()] };
 }
 

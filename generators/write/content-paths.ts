@@ -15,3 +15,13 @@ export function recordPath(root: string, slug: string): string {
 export function pagePath(root: string, slug: string): string {
   return join(root, 'problems', `${slug}.mdx`);
 }
+
+/** Where a problem's expanded system lives, beside its record: <root>/systems/<slug>.json. */
+export function systemsPath(root: string, slug: string): string {
+  return join(root, 'systems', `${slug}.json`);
+}
+
+/** Where a problem's certificate boxes live, beside its record: <root>/certificates/<slug>.json. */
+export function certificatesPath(root: string, slug: string): string {
+  return join(root, 'certificates', `${slug}.json`);
+}

@@ -7,7 +7,8 @@ import { formatIssues } from '../../src/atlas/validation-issue.ts';
 import { AtlasError } from '../pipeline/atlas-error.ts';
 import { displayPath } from '../pipeline/load-definition.ts';
 import { writeFileAtomic, type BeforeRename } from './atomic-write.ts';
-import { pagePath, recordPath } from './content-paths.ts';
+import { certificatesPath, pagePath, recordPath, systemsPath } from './content-paths.ts';
+import type { ProblemSidecars } from '../pipeline/sidecars-of.ts';
 import { emptyReasons, regressionReasons } from './regression-guard.ts';
 import { renderPage } from './render-page.ts';
 
@@ -26,12 +27,13 @@ export type PublishOutcome =
 
 /**
  * Writes a freshly solved record (its history is ignored) and its page under the content root. The published
- * record's history is carried over; identical bytes are not rewritten (the page is rewritten only if it differs);
+ * record's history is carried over; identical bytes are not rewritten (the page and the sidecar files, when given, are
+ * rewritten only if they differ);
  * a worse record (or one with an instance that found nothing though its count is positive) is refused unless
  * `force`; the first publication and every replacement append a dated history entry. Record first, then page, each
  * atomically. A published record that cannot be read is an AtlasError('content') unless `force`.
  */
-export function publish(root: string, fresh: SolveRecord, options: PublishOptions = {}): PublishOutcome {
+export function publish(root: string, fresh: SolveRecord, options: PublishOptions = {}, sidecars?: ProblemSidecars): PublishOutcome {
   const file = recordPath(root, fresh.slug);
   const previousText = existsSync(file) ? readFileSync(file, 'utf8') : null;
   const previous = previousText === null ? null : parseRecord(previousText);
@@ -43,6 +45,7 @@ export function publish(root: string, fresh: SolveRecord, options: PublishOption
   let text = canonicalJson(record);
   if (published && text === previousText) {
     writePage(root, record, options);
+    if (sidecars) writeSidecars(root, sidecars, options);
     return { status: 'unchanged', record };
   }
   const reasons = [...emptyReasons(record), ...(published ? regressionReasons(published, record) : [])];
@@ -57,7 +60,20 @@ export function publish(root: string, fresh: SolveRecord, options: PublishOption
   if (!check.success) throw new AtlasError('solve', `internal error: the new record of "${record.slug}" fails its schema at ${check.error.issues[0]!.path.join('.')}: ${check.error.issues[0]!.message}; nothing written`);
   writeFileAtomic(file, text, options.beforeRename);
   writePage(root, record, options);
+  if (sidecars) writeSidecars(root, sidecars, options);
   return published ? { status: 'replaced', record, change } : { status: 'created', record };
+}
+
+/** Writes the files beside a record (expanded systems, certificate boxes), each only when its bytes differ. */
+export function writeSidecars(root: string, sidecars: ProblemSidecars, options: PublishOptions = {}): void {
+  const files: [string, unknown][] = [
+    [systemsPath(root, sidecars.systems.slug), sidecars.systems],
+    [certificatesPath(root, sidecars.certificates.slug), sidecars.certificates],
+  ];
+  for (const [file, data] of files) {
+    const text = canonicalJson(data, { compactNumberArrays: true });
+    if (!existsSync(file) || readFileSync(file, 'utf8') !== text) writeFileAtomic(file, text, options.beforeRename);
+  }
 }
 
 /** Writes the record's page when its bytes differ from what is on disk. */

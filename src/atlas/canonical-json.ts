@@ -1,11 +1,28 @@
 /**
- * Canonical JSON text of plain data: object keys sorted by UTF-16 code units at every depth, two-space indent,
+ * Canonical JSON text of plain data (with `compactNumberArrays`, arrays holding only numbers, nulls or such arrays
+ * are written on one line, for large numeric files): object keys sorted by UTF-16 code units at every depth, two-space indent,
  * a trailing newline, numbers written by JSON.stringify (shortest round-trip form; −0 becomes 0). Properties whose
  * value is undefined are left out, as JSON.stringify does. Throws a TypeError naming the path on a non-finite
  * number, a function, a bigint, a symbol or undefined inside an array, so no value is ever silently changed.
  */
-export function canonicalJson(value: unknown): string {
-  return `${JSON.stringify(sortedCopy(value, '$'), null, 2)}\n`;
+export function canonicalJson(value: unknown, options: { compactNumberArrays?: boolean } = {}): string {
+  const sorted = sortedCopy(value, '$');
+  return `${options.compactNumberArrays ? compactWrite(sorted, '') : JSON.stringify(sorted, null, 2)}\n`;
+}
+
+/** Arrays of numbers and nulls, and arrays of those, go on one line; everything else as JSON.stringify(…, 2) would. */
+function compactWrite(value: unknown, indent: string): string {
+  const flat = (v: unknown): boolean => v === null || typeof v === 'number';
+  if (Array.isArray(value) && value.every((v) => flat(v) || (Array.isArray(v) && v.every(flat)))) return JSON.stringify(value);
+  const inner = `${indent}  `;
+  if (Array.isArray(value)) {
+    return value.length === 0 ? '[]' : `[\n${value.map((v) => inner + compactWrite(v, inner)).join(',\n')}\n${indent}]`;
+  }
+  if (value !== null && typeof value === 'object') {
+    const entries = Object.entries(value);
+    return entries.length === 0 ? '{}' : `{\n${entries.map(([k, v]) => `${inner}${JSON.stringify(k)}: ${compactWrite(v, inner)}`).join(',\n')}\n${indent}}`;
+  }
+  return JSON.stringify(value);
 }
 
 function sortedCopy(value: unknown, path: string): unknown {

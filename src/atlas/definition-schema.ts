@@ -1,5 +1,6 @@
 import { z } from 'astro/zod';
 import { countSourceSchema } from './source.ts';
+import { ladderMembershipSchema } from './ladder-membership.ts';
 import { SLUG_PATTERN, describeValue } from './slug.ts';
 
 const text = z.string().trim().min(1, { error: 'must not be empty' });
@@ -52,5 +53,6 @@ export const definitionSchema = z.object({
     )
     .min(1, { error: 'needs at least one instance' }),
   solver: z.looseObject({ kind: text }).optional(),
-  drawing: z.object({ window: fn, configuration: fn, solution: fn }).optional(),
+  drawing: z.object({ window: fn, configuration: fn, solution: fn, projection: text.optional() }).optional(),
+  ladders: z.array(ladderMembershipSchema).optional(),
 });

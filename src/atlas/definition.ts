@@ -3,6 +3,7 @@ import type { ParameterProblem } from '../engine/parameter/solve-by-parameter-ho
 import type * as ExprOps from '../engine/expr/build.ts';
 import type { CountSource } from './source.ts';
 import type { FigureItem } from './figure.ts';
+import type { LadderMembership } from './ladder-membership.ts';
 
 /** A complex value in a definition: a real number, or [re, im]. */
 export type ComplexInput = number | readonly [number, number];
@@ -31,6 +32,8 @@ export interface DrawingDefinition {
   readonly window: (parameters: Readonly<Record<string, number>>, items?: readonly FigureItem[]) => { xMin: number; xMax: number; yMin: number; yMax: number };
   readonly configuration: (parameters: Readonly<Record<string, number>>) => FigureItem[];
   readonly solution: (values: readonly number[], parameters: Readonly<Record<string, number>>) => FigureItem[];
+  /** One sentence for the caption: the plane drawn and how space is projected to it ("Drawn in the (x, y)-plane."). */
+  readonly projection?: string;
 }
 
 /**
@@ -95,6 +98,8 @@ export interface ProblemDefinition {
   /** Defaults to total degree. */
   readonly solver?: SolverChoice;
   readonly drawing?: DrawingDefinition;
+  /** The ladders this problem is a rung of, for links between the rungs. */
+  readonly ladders?: readonly LadderMembership[];
 }
 
 /** Identity helper that gives a definition module its type checking: `export default defineProblem({ … })`. */

@@ -19,10 +19,12 @@ export const figureItemSchema = z.intersection(
   z.object({ layer: z.string().min(1), label: z.string().optional(), solution: z.number().int().nonnegative().optional() }),
 );
 
-/** A whole figure: the world window to show and the items, drawn in order. */
+/** A whole figure: the world window to show, the items (drawn in order), and in which plane they are drawn. */
 export const figureSchema = z.object({
   window: z.object({ xMin: z.number(), xMax: z.number(), yMin: z.number(), yMax: z.number() }),
   items: z.array(figureItemSchema),
+  /** One sentence for the caption: the plane drawn and how space is projected to it (records before it: absent). */
+  projection: z.string().min(1).optional(),
 });
 
 export type FigureShape = z.infer<typeof figureShapeSchema>;

@@ -25,3 +25,8 @@ export function familyPath(family: string): string {
 export function absoluteUrl(path: string, site: string | URL): string {
   return new URL(path, site).href;
 }
+
+/** Site-relative path of a tag's page ("Bézout bound exact" → "/tags/bezout-bound-exact/"). */
+export function tagPath(tag: string): string {
+  return `/tags/${slugify(tag)}/`;
+}

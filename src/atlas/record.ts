@@ -1,6 +1,7 @@
 import { z } from 'astro/zod';
 import { countSourceSchema } from './source.ts';
 import { figureSchema } from './figure.ts';
+import { ladderMembershipSchema } from './ladder-membership.ts';
 
 /** The record format's version; bump it on any incompatible change and teach the reader to migrate. */
 export const RECORD_SCHEMA_VERSION = 1;
@@ -140,6 +141,8 @@ export const solveRecordSchema = z.object({
   caution: z.string().nullable(),
   trueCount: z.number().int().nonnegative().nullable(),
   source: countSourceSchema,
+  /** The ladders the problem is a rung of (records before this field: absent). */
+  ladders: z.array(ladderMembershipSchema).optional(),
   formulation: z.object({
     unknowns: z.array(z.string()),
     parameters: z.array(z.string()),

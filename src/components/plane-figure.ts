@@ -1,52 +1,115 @@
 // Client-side only: the <plane-figure> custom element. The SVG inside is complete without JavaScript; this adds
-// pan/zoom (d3-zoom on the <svg>, transform on g.viewport), layer toggle buttons, a shared highlight between a
-// solution's drawn items and its row in the table named by data-table, and data-ready when hydrated.
+// pan and zoom (d3-zoom on the <svg>, transform on g.viewport; mouse and wheel, two fingers on touch screens so one
+// finger still scrolls the page, arrow and +/−/0 keys on the focused frame, buttons), axes relabelled for the view,
+// points kept at their screen size, layer toggles, a PNG export of the drawing, and the link to the solutions table
+// named by data-table: hovering or focusing a row lights its items, clicking an item asks the table to reveal its row.
+// Sets data-ready when hydrated.
 import { select } from 'd3-selection';
-import { zoom, zoomIdentity, type ZoomBehavior } from 'd3-zoom';
+import { scaleLinear } from 'd3-scale';
+import { zoom, zoomIdentity, type D3ZoomEvent, type ZoomBehavior, type ZoomTransform } from 'd3-zoom';
+import { axisTicks, gridSvg } from '../plots/axis-ticks.ts';
+import { MARGIN, POINT_RADIUS } from '../plots/figure-constants.ts';
+
+/** Zoom limits (the drawing reaches MARGIN beyond the window, so zooming out to 1 / (1 + 2·MARGIN) shows all of it). */
+const MIN_ZOOM = 1 / (1 + 2 * MARGIN), MAX_ZOOM = 40;
+const KEY_STEP = 40, KEY_ZOOM = 1.25, PNG_SCALE = 3;
 
 class PlaneFigure extends HTMLElement {
   #zoom: ZoomBehavior<SVGSVGElement, unknown> | null = null;
+  #svg: SVGSVGElement | null = null;
 
   connectedCallback(): void {
-    const svg = this.querySelector<SVGSVGElement>('svg');
+    const svg = this.querySelector<SVGSVGElement>('svg.figure-svg');
     const viewport = svg?.querySelector<SVGGElement>('g.viewport');
-    if (!svg || !viewport) return;
+    const frame = this.querySelector<HTMLElement>('.figure-frame');
+    if (!svg || !viewport || !frame) return;
+    this.#svg = svg;
     const width = svg.viewBox.baseVal.width, height = svg.viewBox.baseVal.height;
+    const [xMin, xMax, yMin, yMax] = (svg.dataset.window ?? '').split(' ').map(Number) as [number, number, number, number];
+    const x = scaleLinear().domain([xMin, xMax]).range([0, width]);
+    const y = scaleLinear().domain([yMin, yMax]).range([height, 0]);
+    const points = [...svg.querySelectorAll<SVGCircleElement>('circle.shape-point')];
+    const grid = svg.querySelector('g.grid'), ticks = svg.querySelector('g.ticks');
     const behaviour = zoom<SVGSVGElement, unknown>()
-      .scaleExtent([0.5, 40])
+      .scaleExtent([MIN_ZOOM, MAX_ZOOM])
       .extent([[0, 0], [width, height]])
-      .on('zoom', (event) => {
-        viewport.setAttribute('transform', event.transform.toString());
-        this.toggleAttribute('data-zoomed', event.transform.k !== 1 || event.transform.x !== 0 || event.transform.y !== 0);
+      .translateExtent([[-MARGIN * width, -MARGIN * height], [(1 + MARGIN) * width, (1 + MARGIN) * height]])
+      // Touch: only gestures with two or more fingers, so a one-finger swipe scrolls the page past the figure.
+      .filter((event: Event) => ('touches' in event ? (event as TouchEvent).touches.length >= 2 : !(event as MouseEvent).button && (!(event as MouseEvent).ctrlKey || event.type === 'wheel')))
+      .on('zoom', (event: D3ZoomEvent<SVGSVGElement, unknown>) => {
+        const t = event.transform;
+        viewport.setAttribute('transform', t.toString());
+        for (const p of points) p.setAttribute('r', String(POINT_RADIUS / t.k));
+        const view = axisTicks(t.rescaleX(x), t.rescaleY(y), width, height);
+        const drawn = gridSvg(width, height, view.xTicks, view.yTicks);
+        if (grid) grid.innerHTML = drawn.grid;
+        if (ticks) ticks.innerHTML = drawn.ticks;
+        this.toggleAttribute('data-zoomed', !isIdentity(t));
       });
-    select(svg).call(behaviour);
+    select(svg).call(behaviour).on('dblclick.zoom', null);
     this.#zoom = behaviour;
+    frame.tabIndex = 0;
+    frame.setAttribute('role', 'group');
+    frame.setAttribute('aria-label', 'Figure: arrow keys pan, plus and minus zoom, 0 resets the view');
+    frame.addEventListener('keydown', (e) => this.#key(e));
     for (const button of this.querySelectorAll<HTMLButtonElement>('button[data-toggle-layer]')) {
       button.addEventListener('click', () => this.#toggle(button));
     }
-    this.querySelector<HTMLButtonElement>('button[data-reset-view]')?.addEventListener('click', () => {
-      if (this.#zoom) select(svg).call(this.#zoom.transform, zoomIdentity);
-    });
+    for (const button of this.querySelectorAll<HTMLButtonElement>('button[data-zoom]')) {
+      button.addEventListener('click', () => this.#scaleBy(button.dataset.zoom === 'in' ? KEY_ZOOM : 1 / KEY_ZOOM));
+    }
+    this.querySelector('button[data-reset-view]')?.addEventListener('click', () => this.#reset());
+    this.querySelector('button[data-export-png]')?.addEventListener('click', () => void this.#exportPng());
     this.#linkTable(svg);
     this.querySelector<HTMLElement>('.figure-tools')?.removeAttribute('hidden');
     this.setAttribute('data-ready', '');
   }
 
+  #scaleBy(factor: number): void {
+    if (this.#svg && this.#zoom) select(this.#svg).call(this.#zoom.scaleBy, factor);
+  }
+
+  #reset(): void {
+    if (this.#svg && this.#zoom) select(this.#svg).call(this.#zoom.transform, zoomIdentity);
+  }
+
+  #key(e: KeyboardEvent): void {
+    if (!this.#svg || !this.#zoom || e.altKey || e.ctrlKey || e.metaKey) return;
+    const pan: Readonly<Record<string, [number, number]>> = { ArrowLeft: [KEY_STEP, 0], ArrowRight: [-KEY_STEP, 0], ArrowUp: [0, KEY_STEP], ArrowDown: [0, -KEY_STEP] };
+    const move = pan[e.key];
+    if (move) {
+      const k = (this.#svg as SVGSVGElement & { __zoom?: ZoomTransform }).__zoom?.k ?? 1;
+      select(this.#svg).call(this.#zoom.translateBy, move[0] / k, move[1] / k);
+    } else if (e.key === '+' || e.key === '=') this.#scaleBy(KEY_ZOOM);
+    else if (e.key === '-' || e.key === '_') this.#scaleBy(1 / KEY_ZOOM);
+    else if (e.key === '0') this.#reset();
+    else return;
+    e.preventDefault();
+  }
+
   #linkTable(svg: SVGSVGElement): void {
     const table = this.dataset.table ? document.getElementById(this.dataset.table) : null;
-    const focus = (index: string | null) => {
-      for (const el of [...this.querySelectorAll('.is-focus'), ...(table?.querySelectorAll('.is-focus') ?? [])]) el.classList.remove('is-focus');
+    const mark = (cls: string, index: string | null) => {
+      for (const el of [...this.querySelectorAll(`.${cls}`), ...(table?.querySelectorAll(`tr.${cls}`) ?? [])]) el.classList.remove(cls);
       if (index === null) return;
-      const sel = CSS.escape(index);
-      for (const el of this.querySelectorAll(`[data-solution="${sel}"]`)) el.classList.add('is-focus');
-      table?.querySelector(`tr[data-solution-row="${sel}"]`)?.classList.add('is-focus');
+      for (const el of this.querySelectorAll(`[data-solution="${CSS.escape(index)}"]`)) el.classList.add(cls);
+      table?.querySelector(`tr[data-solution-row="${CSS.escape(index)}"]`)?.classList.add(cls);
     };
-    svg.addEventListener('pointerover', (e) => focus((e.target as Element).closest('[data-solution]')?.getAttribute('data-solution') ?? null));
-    svg.addEventListener('pointerleave', () => focus(null));
-    for (const row of table?.querySelectorAll<HTMLTableRowElement>('tr[data-solution-row]') ?? []) {
-      row.addEventListener('pointerenter', () => focus(row.dataset.solutionRow ?? null));
-      row.addEventListener('pointerleave', () => focus(null));
-    }
+    const solutionOf = (target: EventTarget | null) => (target as Element | null)?.closest?.('[data-solution]')?.getAttribute('data-solution') ?? null;
+    svg.addEventListener('pointerover', (e) => mark('is-focus', solutionOf(e.target)));
+    svg.addEventListener('pointerleave', () => mark('is-focus', null));
+    svg.addEventListener('click', (e) => {
+      const index = solutionOf(e.target);
+      if (index === null) return;
+      mark('is-selected', index);
+      table?.dispatchEvent(new CustomEvent('solution-reveal', { detail: { index: Number(index) } }));
+    });
+    if (!table) return;
+    const rowOf = (target: EventTarget | null) => (target as Element | null)?.closest?.('tr[data-solution-row]')?.getAttribute('data-solution-row') ?? null;
+    table.addEventListener('pointerover', (e) => mark('is-focus', rowOf(e.target)));
+    table.addEventListener('pointerleave', () => mark('is-focus', null));
+    table.addEventListener('focusin', (e) => mark('is-focus', rowOf(e.target)));
+    table.addEventListener('focusout', () => mark('is-focus', null));
   }
 
   #toggle(button: HTMLButtonElement): void {
@@ -58,6 +121,38 @@ class PlaneFigure extends HTMLElement {
       else group.setAttribute('display', 'none');
     }
   }
+
+  /** Draws the standalone SVG file (the figure as first shown, with its own styles) at PNG_SCALE and downloads it. */
+  async #exportPng(): Promise<void> {
+    const href = this.dataset.svgHref;
+    if (!href) return;
+    const text = await (await fetch(href)).text();
+    const url = URL.createObjectURL(new Blob([text], { type: 'image/svg+xml' }));
+    try {
+      const image = new Image();
+      image.src = url;
+      await image.decode();
+      const canvas = document.createElement('canvas');
+      canvas.width = image.naturalWidth * PNG_SCALE;
+      canvas.height = image.naturalHeight * PNG_SCALE;
+      const context = canvas.getContext('2d');
+      if (!context) return;
+      context.drawImage(image, 0, 0, canvas.width, canvas.height);
+      const png = await new Promise<Blob | null>((ok) => canvas.toBlob(ok, 'image/png'));
+      if (!png) return;
+      const link = document.createElement('a');
+      link.href = URL.createObjectURL(png);
+      link.download = this.dataset.pngName ?? 'figure.png';
+      link.click();
+      setTimeout(() => URL.revokeObjectURL(link.href), 10_000);
+    } finally {
+      URL.revokeObjectURL(url);
+    }
+  }
+}
+
+function isIdentity(t: ZoomTransform): boolean {
+  return t.k === 1 && t.x === 0 && t.y === 0;
 }
 
 if (!customElements.get('plane-figure')) customElements.define('plane-figure', PlaneFigure);

@@ -1,8 +1,10 @@
 import { line as d3line } from 'd3-shape';
 import type { Figure, FigureItem } from '../atlas/figure.ts';
 import { clipLine, clipPolyline, type Point } from './clip.ts';
-import { CONIC_SAMPLES, sampleConic } from './sample-conic.ts';
-import { windowScales } from './world-window.ts';
+import { conicPath } from './conic-path.ts';
+import { expandWindow, windowScales } from './world-window.ts';
+import { axisTicks, type Tick } from './axis-ticks.ts';
+import { MARGIN, POINT_RADIUS } from './figure-constants.ts';
 
 /** One SVG element of a figure, in screen coordinates (2 decimals): a <circle> or a <path>. */
 export interface SceneItem {
@@ -22,46 +24,56 @@ export interface Scene {
   readonly omittedSolutions: number;
   readonly height: number;
   readonly layers: { readonly name: string; readonly items: SceneItem[] }[];
-  readonly xTicks: { readonly at: number; readonly value: number }[];
-  readonly yTicks: { readonly at: number; readonly value: number }[];
+  readonly xTicks: Tick[];
+  readonly yTicks: Tick[];
 }
 
-/** Radius in px of a drawn point. */
-export const POINT_RADIUS = 4.5;
+export { MARGIN, POINT_RADIUS };
+
+/** Largest distance in px between a drawn conic and the true one at the figure's own scale. */
+export const CURVE_TOLERANCE = 0.02;
 
 const round2 = (v: number) => Math.round(v * 100) / 100;
 const pathOf = d3line<Point>().digits(2);
 
-/** Drops screen points closer than `gap` px to the last kept one (first and last always kept): smaller paths, same look. */
-export function thin(points: readonly Point[], gap: number): Point[] {
+/**
+ * Douglas–Peucker: keeps the points a polyline needs so that no dropped point lies farther than `tolerance` from the
+ * kept polyline (first and last always kept). Smaller paths, the same look at every zoom the page allows.
+ */
+export function simplify(points: readonly Point[], tolerance: number): Point[] {
   if (points.length <= 2) return [...points];
-  const out: Point[] = [points[0]!];
-  for (let i = 1; i < points.length - 1; i++) {
-    const p = points[i]!, q = out.at(-1)!;
-    if (Math.hypot(p[0] - q[0], p[1] - q[1]) >= gap) out.push(p);
+  const keep = new Uint8Array(points.length);
+  keep[0] = 1; keep[points.length - 1] = 1;
+  const stack: [number, number][] = [[0, points.length - 1]];
+  while (stack.length > 0) {
+    const [i, j] = stack.pop()!;
+    const a = points[i]!, b = points[j]!, dx = b[0] - a[0], dy = b[1] - a[1], len = Math.hypot(dx, dy);
+    let worst = -1, far = 0;
+    for (let k = i + 1; k < j; k++) {
+      const p = points[k]!;
+      const dist = len === 0 ? Math.hypot(p[0] - a[0], p[1] - a[1]) : Math.abs(dy * (p[0] - a[0]) - dx * (p[1] - a[1])) / len;
+      if (dist > far) { far = dist; worst = k; }
+    }
+    if (worst >= 0 && far > tolerance) { keep[worst] = 1; stack.push([i, worst], [worst, j]); }
   }
-  out.push(points.at(-1)!);
-  return out;
+  return points.filter((_, k) => keep[k] === 1);
 }
 
-/** Total conic sample points a figure may spend; many conics share it (at least 64 points per branch each). */
-export const CONIC_SAMPLE_BUDGET = 60_000;
-
 /**
- * Lays out a record's figure for an SVG of `width` px: circles as <circle>, conics sampled and clipped, lines and
- * polylines clipped to the window, points as small circles. Items that fall wholly outside the window are kept
- * (an empty path) so every drawn solution keeps its element. Only the items of the first `maxSolutions` solution
- * indices are drawn (the count left out is reported). Deterministic: coordinates rounded to 0.01 px.
+ * Lays out a record's figure for an SVG of `width` px: circles as <circle>, conics as cubic Bézier paths within
+ * CURVE_TOLERANCE px of the true curve, lines and polylines clipped (polylines simplified to the same tolerance),
+ * points as small circles. Curves extend MARGIN beyond the window on every side. Items that fall wholly outside are
+ * kept (an empty path) so every drawn solution keeps its element. Only the items of the first `maxSolutions`
+ * solution indices are drawn (the count left out is reported). Deterministic: coordinates rounded to 0.01 px.
  */
 export function figureScene(figure: Figure, width = 640, maxSolutions = 200): Scene {
   const { x, y, height } = windowScales(figure.window, width);
   const solutionIds = [...new Set(figure.items.flatMap((it) => (it.solution === undefined ? [] : [it.solution])))].sort((a, b) => a - b);
   const kept = new Set(solutionIds.slice(0, maxSolutions));
   const items = figure.items.filter((it) => it.solution === undefined || kept.has(it.solution));
-  const conics = items.filter((it) => it.shape === 'conic').length;
-  const samples = Math.min(CONIC_SAMPLES, Math.max(64, Math.floor(CONIC_SAMPLE_BUDGET / Math.max(1, conics))));
+  const outer = expandWindow(figure.window, MARGIN);
   const toScreen = (p: Point): Point => [x(p[0]), y(p[1])];
-  const runsPath = (runs: Point[][]) => runs.map((r) => pathOf(thin(r.map(toScreen), 1)) ?? '').join('');
+  const runsPath = (runs: Point[][]) => runs.map((r) => pathOf(simplify(r.map(toScreen), CURVE_TOLERANCE)) ?? '').join('');
   const layers = new Map<string, SceneItem[]>();
   items.forEach((item, index) => {
     const base = { kind: item.shape, layer: item.layer, solution: item.solution ?? null, label: item.label ?? null };
@@ -74,15 +86,15 @@ export function figureScene(figure: Figure, width = 640, maxSolutions = 200): Sc
         made = { ...base, tag: 'circle', attrs: { cx: round2(x(item.x)), cy: round2(y(item.y)), r: POINT_RADIUS } };
         break;
       case 'conic':
-        made = { ...base, tag: 'path', attrs: { d: runsPath(sampleConic(item.coefficients, figure.window, samples).runs) } };
+        made = { ...base, tag: 'path', attrs: { d: conicPath(item.coefficients, outer, x, y, CURVE_TOLERANCE) } };
         break;
       case 'line': {
-        const seg = clipLine(item.a, item.b, item.c, figure.window);
+        const seg = clipLine(item.a, item.b, item.c, outer);
         made = { ...base, tag: 'path', attrs: { d: seg ? runsPath([seg]) : '' } };
         break;
       }
       case 'polyline':
-        made = { ...base, tag: 'path', attrs: { d: runsPath(clipPolyline(item.points, figure.window, item.closed)) } };
+        made = { ...base, tag: 'path', attrs: { d: runsPath(clipPolyline(item.points, outer, item.closed)) } };
         break;
       default:
         throw new Error(`figure item ${index}: unknown shape ${JSON.stringify((item as { shape: unknown }).shape)}`);
@@ -97,7 +109,6 @@ export function figureScene(figure: Figure, width = 640, maxSolutions = 200): Sc
     drawnSolutions: kept.size,
     omittedSolutions: solutionIds.length - kept.size,
     layers: [...layers].map(([name, items]) => ({ name, items })),
-    xTicks: x.ticks(6).map((v) => ({ at: round2(x(v)), value: v })).filter((t) => t.at > 12 && t.at < width - 12),
-    yTicks: y.ticks(6).map((v) => ({ at: round2(y(v)), value: v })).filter((t) => t.at > 12 && t.at < height - 12),
+    ...axisTicks(x, y, width, height),
   };
 }

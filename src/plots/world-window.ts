@@ -17,3 +17,9 @@ export function windowScales(window: WorldWindow, width: number): { x: ScaleLine
     height,
   };
 }
+
+/** The window grown by `fraction` of its width and height on every side (fraction 0.5: twice as wide and tall). */
+export function expandWindow(window: WorldWindow, fraction: number): WorldWindow {
+  const dx = (window.xMax - window.xMin) * fraction, dy = (window.yMax - window.yMin) * fraction;
+  return { xMin: window.xMin - dx, xMax: window.xMax + dx, yMin: window.yMin - dy, yMax: window.yMax + dy };
+}

@@ -21,14 +21,22 @@ export function formatNumber(value: number, digits = 6): string {
   return text.replace(/-/g, MINUS);
 }
 
-/** A complex [re, im] as "a + bi" / "a − bi" / "a" (imaginary part below `zero` × (1 + |re|) shown as real). */
-export function formatComplex(value: readonly [number, number], digits = 6, zero = 1e-12): string {
+/**
+ * A complex [re, im] in display parts: ["a"], ["bi"], or ["a", "+ bi"] / ["a", "− bi"] (imaginary part below
+ * `zero` × (1 + |re|) dropped, real part below `zero` × (1 + |im|) dropped, "1i" written "i"). Tables may wrap between parts.
+ */
+export function complexParts(value: readonly [number, number], digits = 6, zero = 1e-12): string[] {
   const [re, im] = value;
-  if (Math.abs(im) <= zero * (1 + Math.abs(re))) return formatNumber(re, digits);
+  if (Math.abs(im) <= zero * (1 + Math.abs(re))) return [formatNumber(re, digits)];
   const imText = formatNumber(Math.abs(im), digits);
   const imPart = imText === '1' ? 'i' : `${imText}i`;
-  if (Math.abs(re) <= zero * (1 + Math.abs(im))) return im < 0 ? `${MINUS}${imPart}` : imPart;
-  return `${formatNumber(re, digits)} ${im < 0 ? MINUS : '+'} ${imPart}`;
+  if (Math.abs(re) <= zero * (1 + Math.abs(im))) return [im < 0 ? `${MINUS}${imPart}` : imPart];
+  return [formatNumber(re, digits), `${im < 0 ? MINUS : '+'} ${imPart}`];
+}
+
+/** A complex [re, im] as "a + bi" / "a − bi" / "a" / "bi" (see complexParts). */
+export function formatComplex(value: readonly [number, number], digits = 6, zero = 1e-12): string {
+  return complexParts(value, digits, zero).join(' ');
 }
 
 /** A residual or other small positive quantity in two-digit exponent form ("5.1e−16"). */

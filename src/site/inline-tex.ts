@@ -1,15 +1,9 @@
-import katex from 'katex';
-
-const ESCAPES: Readonly<Record<string, string>> = { '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' };
-
-/** Escapes text for HTML element content and attribute values. */
-export function escapeHtml(text: string): string {
-  return text.replace(/[&<>"']/g, (ch) => ESCAPES[ch]!);
-}
+import { escapeHtml } from './escape-html.ts';
+import { mathHtml } from './math/math-html.ts';
 
 /**
- * A short record string with $…$ (inline) and $$…$$ (display) TeX as HTML: formulas rendered by KaTeX (a bad
- * formula throws, naming it), other text escaped; "\$" stands for a literal dollar. Throws on an unclosed $.
+ * A short record string with $…$ (inline) and $$…$$ (display) TeX as HTML: formulas rendered by KaTeX with their
+ * plain words for search (mathHtml; a bad formula throws, naming it), other text escaped; "\$" stands for a literal dollar. Throws on an unclosed $.
  */
 export function texToHtml(text: string): string {
   let html = '';
@@ -24,7 +18,7 @@ export function texToHtml(text: string): string {
     if (close < 0) throw new Error(`unclosed ${display ? '$$' : '$'} at character ${i} in "${text}"`);
     const tex = text.slice(i + open, close);
     try {
-      html += katex.renderToString(tex, { displayMode: display, throwOnError: true });
+      html += mathHtml(tex, display, { throwOnError: true });
     } catch (error) {
       throw new Error(`bad TeX "${tex}" in "${text}": ${(error as Error).message}`, { cause: error });
     }

@@ -7,8 +7,8 @@ function assertPagefind(step: string, errors: readonly string[]): void {
   if (errors.length > 0) throw new Error(`pagefind ${step} failed: ${errors.join('; ')}`);
 }
 
-/** KaTeX writes each formula twice (HTML and MathML); index only its TeX source (the MathML annotation). */
-export const EXCLUDE_SELECTORS = ['.katex-html', '.katex-mathml semantics > mrow'];
+/** Formulas are indexed by their plain words (the hidden span mathHtml writes), never by KaTeX's HTML, MathML or TeX. */
+export const EXCLUDE_SELECTORS = ['.katex'];
 
 /** Astro integration: after the build, indexes dist/ with the Pagefind Node API and writes dist/pagefind/. */
 export function pagefindIndex(): AstroIntegration {

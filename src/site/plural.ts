@@ -2,8 +2,3 @@
 export function countNoun(n: number, singular: string, plural = `${singular}s`): string {
   return `${n.toLocaleString('en-US')} ${n === 1 ? singular : plural}`;
 }
-
-/** A family name for headings: first letter capitalised, the rest as recorded ("circles" → "Circles"). */
-export function familyLabel(family: string): string {
-  return family.charAt(0).toUpperCase() + family.slice(1);
-}

@@ -1,10 +1,11 @@
 import { defineMdastPlugin } from 'satteri';
-import katex from 'katex';
+import type katex from 'katex';
+import { mathHtml } from './math/math-html.ts';
 
-/** Sätteri mdast plugin: renders $…$ and $$…$$ with KaTeX at build time; with throwOnError a bad formula fails the entry. */
+/** Sätteri mdast plugin: renders $…$ and $$…$$ at build time (mathHtml); with throwOnError a bad formula fails the entry. */
 export function satteriKatex(options: katex.KatexOptions = {}) {
   const render = (tex: string, displayMode: boolean) => ({
-    raw: katex.renderToString(tex, { ...options, displayMode }),
+    raw: mathHtml(tex, displayMode, options),
     mdxExpressions: false,
   });
   return defineMdastPlugin({

@@ -1,22 +1,35 @@
 import type { SolveRecord } from '../atlas/record.ts';
+import type { CertificatesFile } from '../atlas/sidecars.ts';
 import { instancesInPageOrder } from './ladder.ts';
 
-/** The downloadable solution set of a record: every instance's parameters and solutions, keyed by coordinate name. */
-export function solutionsDocument(record: SolveRecord, recordVersion: number) {
+/**
+ * The downloadable solution set of a record: every instance's parameters and solutions, keyed by coordinate name,
+ * and beside each solution its certificate (the Krawczyk box in the formulation's unknowns, or null) when the
+ * certificates file is given. Throws when that file and the record disagree on an instance or its solution count.
+ */
+export function solutionsDocument(record: SolveRecord, recordVersion: number, certificates: CertificatesFile | null = null) {
+  const boxesOf = (id: string, count: number) => {
+    if (!certificates) return null;
+    const boxes = certificates.instances.find((c) => c.id === id)?.boxes;
+    if (!boxes || boxes.length !== count) throw new Error(`certificates/${record.slug}.json: instance "${id}" has ${boxes?.length ?? 'no'} boxes for ${count} solutions`);
+    return boxes;
+  };
   return {
     slug: record.slug,
     title: record.title,
     recordVersion,
     engineVersion: record.engineVersion,
     coordinates: [...record.coordinates],
-    note: 'Complex values are [re, im]. Residual: ‖F(x)‖∞ / (1 + ‖x‖∞). Condition: null when the Jacobian is singular.',
+    ...(certificates ? { unknowns: [...certificates.unknowns] } : {}),
+    note: 'Complex values are [re, im]. Residual: ‖F(x)‖∞ / (1 + ‖x‖∞). Condition: null when the Jacobian is singular.' +
+      (certificates ? ' Certificate: the box, [reLo, reHi, imLo, imHi] per unknown of system.txt, on which Krawczyk\'s test proved exactly one solution (outward rounding); null when not certified.' : ''),
     instances: instancesInPageOrder(record).map((inst) => ({
       id: inst.id,
       kind: inst.kind,
       label: inst.label,
       seed: inst.seed,
       parameters: inst.parameters,
-      solutions: inst.solutions.map((s, index) => ({
+      solutions: inst.solutions.map((s, index, all) => ({
         index,
         values: Object.fromEntries(record.coordinates.map((name, k) => [name, s.values[k] ?? null])),
         residual: s.residual,
@@ -25,6 +38,7 @@ export function solutionsDocument(record: SolveRecord, recordVersion: number) {
         real: s.real,
         certified: s.certified,
         certifiedReal: s.certifiedReal,
+        ...(certificates ? { certificate: boxesOf(inst.id, all.length)![index] ?? null } : {}),
       })),
     })),
   };

@@ -23,3 +23,14 @@ describe('canonical JSON', () => {
     expect(() => canonicalJson(value)).toThrow(message);
   });
 });
+
+describe('canonicalJson with compactNumberArrays', () => {
+  it('writes arrays of numbers (and of such arrays) on one line, the rest indented, keys sorted', () => {
+    const text = canonicalJson({ z: [[1, 2], null, [[0.5, -0, 3, 4]]], a: ['x'], m: { b: [1e-300] } }, { compactNumberArrays: true });
+    expect(text).toBe('{\n  "a": [\n    "x"\n  ],\n  "m": {\n    "b": [1e-300]\n  },\n  "z": [\n    [1,2],\n    null,\n    [[0.5,0,3,4]]\n  ]\n}\n');
+    expect(JSON.parse(text)).toEqual({ a: ['x'], m: { b: [1e-300] }, z: [[1, 2], null, [[0.5, 0, 3, 4]]] });
+  });
+  it('is the plain canonical form without the option', () => {
+    expect(canonicalJson({ a: [1, 2] })).toBe('{\n  "a": [\n    1,\n    2\n  ]\n}\n');
+  });
+});

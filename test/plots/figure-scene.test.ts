@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { figureScene, POINT_RADIUS, thin } from '../../src/plots/figure-scene.ts';
+import { CURVE_TOLERANCE, figureScene, MARGIN, POINT_RADIUS, simplify } from '../../src/plots/figure-scene.ts';
+import { cubicAt, type Cubic } from '../../src/plots/cubic-fit.ts';
 import type { Figure } from '../../src/atlas/figure.ts';
 import { fixtureRecord } from '../site/fixture-record.ts';
 
@@ -29,25 +30,43 @@ describe('figureScene', () => {
     expect(item).toMatchObject({ tag: 'circle', kind: 'point', solution: 2, attrs: { cx: 200, cy: 100, r: POINT_RADIUS } });
   });
 
-  it('clips a line to the window and keeps an empty path for a line that misses it', () => {
+  it('clips a line to the window grown by MARGIN on each side, and keeps an empty path for a line that misses it', () => {
+    expect(MARGIN).toBe(0.5);
     const fig: Figure = { window: W, items: [
       { shape: 'line', a: 0, b: 1, c: 0, layer: 'construction' },
       { shape: 'line', a: 0, b: 1, c: -5, layer: 'construction' },
     ] };
     const [inside, outside] = figureScene(fig, 400).layers[0]!.items;
-    expect(['M0,100L400,100', 'M400,100L0,100']).toContain(inside!.attrs.d);
+    expect(['M-200,100L600,100', 'M600,100L-200,100']).toContain(inside!.attrs.d);
     expect(outside!.attrs.d).toBe('');
   });
 
-  it('draws conics and polylines as paths with 2-decimal coordinates', () => {
-    const fig: Figure = { window: W, items: [
-      { shape: 'conic', coefficients: [1, 0, 4, 0, 0, -1], layer: 'given' },
-      { shape: 'polyline', points: [[-1, 0], [0, 0.5], [1, 0]], closed: false, layer: 'solution' },
-    ] };
-    const [given, sol] = figureScene(fig, 400).layers;
-    expect(String(given!.items[0]!.attrs.d)).toMatch(/^M[\d.]+,[\d.]+(L[\d.]+,[\d.]+)+/);
-    expect(String(given!.items[0]!.attrs.d)).not.toMatch(/\.\d{3}/);
-    expect(sol!.items[0]!.attrs.d).toBe('M100,100L200,50L300,100');
+  it('draws a polyline as a path with 2-decimal coordinates', () => {
+    const fig: Figure = { window: W, items: [{ shape: 'polyline', points: [[-1, 0], [0, 0.5], [1, 0]], closed: false, layer: 'solution' }] };
+    expect(figureScene(fig, 400).layers[0]!.items[0]!.attrs.d).toBe('M100,100L200,50L300,100');
+  });
+
+  it('draws an ellipse wholly inside as one closed run of a few cubic Béziers within the tolerance', () => {
+    // x² + 4y² = 1 in the window [−2, 2] × [−1, 1] at 400 px: centre (200, 100), semi-axes 100 and 50 px.
+    const fig: Figure = { window: W, items: [{ shape: 'conic', coefficients: [1, 0, 4, 0, 0, -1], layer: 'given' }] };
+    const d = String(figureScene(fig, 400).layers[0]!.items[0]!.attrs.d);
+    expect(d).toMatch(/^M[\d.]+,[\d.]+(C[-\d.]+,[-\d.]+,[-\d.]+,[-\d.]+,[-\d.]+,[-\d.]+)+Z$/);
+    expect(d).not.toMatch(/\.\d{3}/);
+    const numbers = d.slice(1, -1).split(/[C,]/).map(Number);
+    const start: readonly [number, number] = [numbers[0]!, numbers[1]!];
+    const cubics: Cubic[] = [];
+    for (let k = 2, p = start; k < numbers.length; k += 6) {
+      const c: Cubic = [p, [numbers[k]!, numbers[k + 1]!], [numbers[k + 2]!, numbers[k + 3]!], [numbers[k + 4]!, numbers[k + 5]!]];
+      cubics.push(c);
+      p = c[3];
+    }
+    expect(cubics.length).toBeLessThanOrEqual(16);
+    // Distance to the ellipse ((x − 200)/100)² + ((y − 100)/50)² = 1, to first order: |F| / |∇F|; rounding adds ≤ 0.01 px.
+    for (const c of cubics) for (let k = 0; k <= 16; k++) {
+      const [x, y] = cubicAt(c, k / 16), u = (x - 200) / 100, v = (y - 100) / 50;
+      const distance = Math.abs(u * u + v * v - 1) / Math.hypot((2 * u) / 100, (2 * v) / 50);
+      expect(distance).toBeLessThan(CURVE_TOLERANCE + 0.01);
+    }
   });
 
   it('gives ticks at least 12 px inside the frame, so their labels are not cut', () => {
@@ -71,17 +90,20 @@ describe('figureScene on large figures', () => {
     expect(scene.layers.find((l) => l.name === 'solution')!.items.map((i) => i.solution)).toEqual([0, 1, 2, 3, 4, 5, 6, 7, 8, 9]);
     expect(scene.layers.find((l) => l.name === 'given')!.items).toHaveLength(1);
   });
-  it('shares the sampling budget among many conics, keeping the page small', () => {
+  it('keeps 200 drawn ellipses small: under 700 bytes of path each (each was about 6 KB as polylines)', () => {
     const scene = figureScene(many(200), 400);
     const bytes = scene.layers.flatMap((l) => l.items).reduce((s, i) => s + String(i.attrs.d ?? '').length, 0);
     expect(scene.omittedSolutions).toBe(0);
-    expect(bytes).toBeLessThan(1_000_000);
+    expect(bytes).toBeLessThan(200 * 700);
   });
 });
 
-describe('thin', () => {
-  it('drops points closer than the gap but keeps both ends', () => {
-    expect(thin([[0, 0], [0.1, 0], [0.2, 0], [1, 0], [1.1, 0]], 0.5)).toEqual([[0, 0], [1, 0], [1.1, 0]]);
+describe('simplify', () => {
+  it('drops points on the line between their neighbours but keeps both ends', () => {
+    expect(simplify([[0, 0], [0.1, 0], [0.2, 0], [1, 0], [1.1, 0]], 0.05)).toEqual([[0, 0], [1.1, 0]]);
   });
-  it('leaves two-point runs alone', () => expect(thin([[0, 0], [0, 0.1]], 0.5)).toEqual([[0, 0], [0, 0.1]]));
+  it('keeps a corner farther than the tolerance and drops a wiggle within it', () => {
+    expect(simplify([[0, 0], [1, 0.01], [2, 0], [3, 1], [4, 0]], 0.05)).toEqual([[0, 0], [2, 0], [3, 1], [4, 0]]);
+  });
+  it('leaves two-point runs alone', () => expect(simplify([[0, 0], [0, 0.1]], 0.5)).toEqual([[0, 0], [0, 0.1]]));
 });

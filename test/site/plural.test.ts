@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { countNoun, familyLabel } from '../../src/site/plural.ts';
+import { countNoun } from '../../src/site/plural.ts';
+import { familyWords } from '../../src/site/search/filter-words.ts';
 
 // English plural and capitalisation for labels (common practice, no source).
 describe('labels', () => {
@@ -7,7 +8,7 @@ describe('labels', () => {
     expect(countNoun(n, 'real solution')).toBe(want);
   });
   it('takes an irregular plural', () => expect(countNoun(2, 'vertex', 'vertices')).toBe('2 vertices'));
-  it.each([['circles', 'Circles'], ['Circles and conics', 'Circles and conics'], ['', '']])('familyLabel(%j) is %j', (f, want) => {
-    expect(familyLabel(f)).toBe(want);
+  it.each([['circles', 'Circles'], ['plane-curves', 'Plane curves'], ['Circles and conics', 'Circles and conics'], ['', '']])('familyWords(%j) is %j', (f, want) => {
+    expect(familyWords(f)).toBe(want);
   });
 });

@@ -1,174 +1,91 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { chromium, type Browser, type Page } from 'playwright-core';
-import { readdirSync, existsSync } from 'node:fs';
-import { serveStatic } from './static-server.ts';
-import { ROOT } from './build-site.ts';
+import type { Page } from 'playwright-core';
+import { APOLLONIUS, startSite, type Site } from './browser.ts';
 
-// Browser tests over the real build of dist/ (made by global-setup.ts), served over http on 127.0.0.1.
-// Apollonius' problem: 8 circles tangent to three general circles (Viète 1600; Drechsler–Sterz 1999); the demo
-// configuration is chosen so that all 8 are real.
+// Browser tests of search over the real build. Counts named here: Apollonius' 8 circles (Drechsler–Sterz 1999);
+// the 9 flexes of a plane cubic (Hesse 1844).
 
-let browser: Browser;
-let server: { url: string; close: () => Promise<void> };
+let site: Site;
+beforeAll(async () => { site = await startSite(); });
+afterAll(async () => { await site?.close(); });
 
-beforeAll(async () => {
-  server = await serveStatic(`${ROOT}dist`);
-  browser = await chromium.launch({ executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium', headless: true, args: ['--disable-gpu'] });
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
-
-async function open(path: string): Promise<Page> {
-  const page = await browser.newPage();
-  const errors: string[] = [];
-  page.on('pageerror', (e) => errors.push(e.message));
-  await page.goto(server.url + path);
-  (page as Page & { errors?: string[] }).errors = errors;
-  return page;
+/** Result links on the search page once a search has completed. */
+async function searchPageResults(page: Page): Promise<string[]> {
+  await page.waitForSelector('search-page[data-searched]', { timeout: 20_000 });
+  return page.locator('.search-results a').evaluateAll((as) => as.map((a) => new URL((a as HTMLAnchorElement).href).pathname));
 }
 
-/** Types a query into the masthead search box and returns the hrefs of the results shown. */
-async function search(page: Page, query: string): Promise<string[]> {
-  const input = page.locator('pagefind-searchbox input').first();
-  await input.waitFor();
-  await input.fill(query);
-  const links = page.locator('pagefind-searchbox a[href*="/problems/"]');
-  await links.first().waitFor({ timeout: 20_000 });
-  return links.evaluateAll((as) => as.map((a) => (a as HTMLAnchorElement).getAttribute('href') ?? ''));
-}
-
-let found: string | null = null;
-
-/** The Apollonius page's path, found through the search UI (once per run). */
-async function apolloniusPath(): Promise<string> {
-  if (found) return found;
-  const page = await open('/');
-  const hrefs = await search(page, 'tangent circles');
-  await page.close();
-  expect(hrefs.length).toBeGreaterThan(0);
-  found = new URL(hrefs[0]!, server.url).pathname;
-  return found;
-}
-
-describe('search', () => {
-  it('finds the Apollonius page for "tangent circles" and its page shows the ladder and 3 given + 8 solution circles', async () => {
-    const page = await open('/');
-    await search(page, 'tangent circles');
-    const results = page.locator('pagefind-searchbox a[href*="/problems/"]');
-    const hit = results.filter({ hasText: 'Circles tangent to three circles' }).first();
+describe('masthead search', () => {
+  it('is a labelled form that loads no search code until the reader focuses it', async () => {
+    const requested: string[] = [];
+    const page = await site.open('/');
+    page.on('request', (r) => requested.push(new URL(r.url()).pathname));
+    await page.reload();
+    await page.waitForLoadState('networkidle');
+    expect(requested.filter((p) => p.startsWith('/pagefind/'))).toEqual([]);
+    expect(await page.getByLabel('Search the atlas').count()).toBe(1);
+    await page.getByLabel('Search the atlas').fill('tangent circles');
+    const hit = page.locator(`.live-results a[href="${APOLLONIUS}"]`);
     await hit.waitFor({ timeout: 20_000 });
-    await expect.poll(() => results.first().textContent(), { timeout: 10_000 }).toContain('Circles tangent to three circles');
+    expect(requested).toContain('/pagefind/pagefind.js');
     await hit.click();
-    await page.waitForURL(/\/problems\/[a-z0-9-]+\/$/, { timeout: 20_000 });
-    await expect.poll(() => page.locator('h1').textContent(), { timeout: 10_000 }).toBe('Circles tangent to three circles');
-    const ladder = page.locator('[data-count-ladder]').first();
-    expect(await ladder.locator('li[data-step]').evaluateAll((li) => li.map((l) => l.getAttribute('data-step'))))
-      .toEqual(expect.arrayContaining(['bezout', 'true', 'found', 'certified', 'real', 'certifiedReal']));
-    expect(await ladder.locator('li[data-step="bezout"] .value').textContent()).toBe('8');
-    expect(await ladder.locator('li[data-step="true"] .value').textContent()).toBe('8');
-    const svg = page.locator('plane-figure svg').first();
-    expect(await svg.locator('circle[data-layer="given"]').count()).toBe(3);
-    expect(await svg.locator('circle[data-layer="solution"]').count()).toBe(8);
+    await page.waitForURL(new RegExp(`${APOLLONIUS}$`));
+    expect(await page.locator('h1').textContent()).toBe('Circles tangent to three circles');
+    expect(page.errors).toEqual([]);
     await page.close();
   });
 
-  it('offers family, count and realness filters in the index', async () => {
-    const page = await open('/');
-    await page.locator('pagefind-searchbox input').first().waitFor();
-    const filters = await page.evaluate(`(async () => {
-      const pf = await import('/pagefind/pagefind.js');
-      await pf.init();
-      return await pf.filters();
-    })()`) as Record<string, Record<string, number>>;
-    expect(Object.keys(filters).sort()).toEqual(expect.arrayContaining(['count', 'family', 'realness']));
-    expect(Object.keys(filters.realness ?? {}).every((v) => ['all real found', 'some real', 'none real'].includes(v))).toBe(true);
+  it('opens the search page with the query when submitted (works without JavaScript too)', async () => {
+    const page = await site.open('/', { javaScriptEnabled: false });
+    await page.getByLabel('Search the atlas').fill('flexes');
+    await page.getByLabel('Search the atlas').press('Enter');
+    await page.waitForURL(/\/search\/\?q=flexes$/);
     await page.close();
   });
 });
 
-describe('problem page', () => {
-  it('hydrates the figure: data-ready is set and a wheel zooms the viewport', async () => {
-    const page = await open(await apolloniusPath());
-    const fig = page.locator('plane-figure').first();
-    await page.waitForSelector('plane-figure[data-ready]');
-    await fig.locator('svg').scrollIntoViewIfNeeded();
-    const box = (await fig.locator('svg').boundingBox())!;
-    await page.mouse.move(box.x + box.width / 2, box.y + box.height / 2);
-    await page.mouse.wheel(0, -400);
-    await expect.poll(() => fig.locator('g.viewport').getAttribute('transform'), { timeout: 10_000 }).toMatch(/scale\((?!1\))/);
-    expect((page as Page & { errors?: string[] }).errors).toEqual([]);
+describe('search page', () => {
+  it('restores the query and filters from the address and shows their results', async () => {
+    const page = await site.open('/search/?q=nine+flexes&family=plane-curves');
+    expect(await searchPageResults(page)).toEqual(['/problems/flexes-of-a-plane-cubic/']);
+    expect(await page.locator('input[name="q"]#search-q').inputValue()).toBe('nine flexes');
+    expect(await page.locator('select[name="family"]').inputValue()).toBe('plane-curves');
     await page.close();
   });
 
-  it('hides the solutions when their layer toggle is pressed, and shows them again', async () => {
-    const page = await open(await apolloniusPath());
-    await page.waitForSelector('plane-figure[data-ready]');
-    const fig = page.locator('plane-figure').first();
-    const solutions = fig.locator('[data-layer="solution"]');
-    expect(await solutions.first().isVisible()).toBe(true);
-    await fig.locator('button[data-toggle-layer="solution"]').click();
-    expect(await fig.locator('button[data-toggle-layer="solution"]').getAttribute('aria-pressed')).toBe('false');
-    for (const el of await solutions.all()) expect(await el.isVisible()).toBe(false);
-    expect(await fig.locator('[data-layer="given"]').first().isVisible()).toBe(true);
-    await fig.locator('button[data-toggle-layer="solution"]').click();
-    expect(await solutions.first().isVisible()).toBe(true);
+  it('keeps the address up to date while the reader types and filters', async () => {
+    const page = await site.open('/search/');
+    await page.locator('#search-q').fill('tangent');
+    await expect.poll(() => new URL(page.url()).search, { timeout: 10_000 }).toBe('?q=tangent');
+    await page.locator('select[name="family"]').selectOption('circles');
+    await expect.poll(() => new URL(page.url()).search, { timeout: 10_000 }).toBe('?q=tangent&family=circles');
+    await expect.poll(async () => (await searchPageResults(page)).join(' '), { timeout: 10_000 }).toBe(APOLLONIUS);
     await page.close();
   });
 
-  it('highlights a solution in the figure while its table row is under the pointer', async () => {
-    const page = await open(await apolloniusPath());
-    await page.waitForSelector('plane-figure[data-ready]');
-    const fig = page.locator('plane-figure').first();
-    const tableId = await fig.getAttribute('data-table');
-    await page.locator(`#${tableId} tr[data-solution-row="2"]`).hover();
-    expect(await fig.locator('[data-layer="solution"].is-focus').evaluateAll((els) => els.map((e) => e.getAttribute('data-solution'))))
-      .toEqual(['2']);
+  it('finds nothing for a nonsense word, even though formulas contain its first letters', async () => {
+    const page = await site.open('/search/?q=xyzzyq');
+    expect(await searchPageResults(page)).toEqual([]);
+    expect(await page.locator('.search-status').textContent()).toBe('No problem matches this search.');
     await page.close();
   });
 
-  it('offers a JSON download that parses and matches the solutions table', async () => {
-    const page = await open(await apolloniusPath());
-    const href = await page.locator('a[href$="solutions.json"]').getAttribute('href');
-    const doc = await page.evaluate(`fetch(${JSON.stringify(href)}).then((r) => r.json())`) as {
-      coordinates: string[]; instances: { id: string; solutions: { values: Record<string, [number, number]> }[] }[];
-    };
-    expect(doc.coordinates.length).toBeGreaterThan(0);
-    for (const inst of doc.instances) {
-      const rows = await page.locator(`table[data-solutions="${inst.id}"] tbody tr`).count();
-      expect(rows).toBe(Math.min(64, inst.solutions.length));
-      for (const s of inst.solutions) expect(Object.keys(s.values)).toEqual(doc.coordinates);
-    }
+  it('shows filter values in words and excerpts without TeX', async () => {
+    const page = await site.open('/search/?q=conic');
+    const families = await page.locator('select[name="family"] option').allTextContents();
+    expect(families.some((f) => /^Plane curves \(\d+\)$/.test(f))).toBe(true);
+    const realness = await page.locator('select[name="realness"] option').allTextContents();
+    expect(realness.every((r) => !/^(all real found|some real|none real)/.test(r))).toBe(true);
+    await searchPageResults(page);
+    const excerpts = (await page.locator('.search-results p').allTextContents()).join(' ');
+    expect(excerpts.length).toBeGreaterThan(0);
+    expect(excerpts).not.toMatch(/\\[a-z]+|\^\{|_\{/);
     await page.close();
   });
-});
 
-describe('without JavaScript', () => {
-  it('still shows the whole figure, with the toggle buttons hidden', async () => {
-    const path = await apolloniusPath();
-    const context = await browser.newContext({ javaScriptEnabled: false });
-    const page = await context.newPage();
-    await page.goto(server.url + path);
-    const fig = page.locator('plane-figure').first();
-    expect(await fig.getAttribute('data-ready')).toBeNull();
-    expect(await fig.locator('circle[data-layer="solution"]').count()).toBe(8);
-    expect(await fig.locator('circle[data-layer="solution"]').first().isVisible()).toBe(true);
-    expect(await fig.locator('.figure-tools').isVisible()).toBe(false);
-    await context.close();
-  });
-});
-
-describe('home page', () => {
-  it('lists every problem in the chart and in the table', async () => {
-    const dir = `${ROOT}dist/problems`;
-    const slugs = (existsSync(dir) ? readdirSync(dir) : []).sort();
-    expect(slugs.length).toBeGreaterThan(0);
-    const page = await open('/');
-    const chartRows = await page.locator('svg[data-bounds-chart] [data-chart-row]').evaluateAll((els) => els.map((e) => e.getAttribute('data-chart-row')));
-    const tableRows = await page.locator('table[data-problem-table] [data-problem-row]').evaluateAll((els) => els.map((e) => e.getAttribute('data-problem-row')));
-    expect([...chartRows].sort()).toEqual(slugs);
-    expect([...tableRows].sort()).toEqual(slugs);
+  it('filters by true count alone (every problem with 9 solutions)', async () => {
+    const page = await site.open('/search/?count=9');
+    expect((await searchPageResults(page)).sort()).toEqual(['/problems/flexes-of-a-plane-cubic/', '/problems/points-common-to-two-cubics/']);
     await page.close();
   });
 });

@@ -52,8 +52,9 @@ export default defineProblem({
       authors: ['K. Drechsler', 'U. Sterz'],
       year: 1999,
       title: "Apollonius' contact problem in n-space in view of enumerative geometry",
-      venue: 'Acta Mathematica Universitatis Comenianae 68 (1999), 37–47',
-      note: 'They count 2^(n+1) hyperspheres tangent to n + 1 general ones by Bézout in the space of coefficients. The planar construction goes back to Viète, Apollonius Gallus (Paris, 1600), reconstructing the lost work of Apollonius.',
+      venue: 'Acta Mathematica Universitatis Comenianae 68(1) (1999), 37–47',
+      bib: { type: 'article', journal: 'Acta Mathematica Universitatis Comenianae', volume: '68', number: '1', pages: '37--47' },
+      note: 'They count 2^(n+1) hyperspheres tangent to n + 1 general ones by Bézout in the space of coefficients (volume, issue and pages checked on the article’s first page). That the planar construction goes back to Viète’s reconstruction of the lost work of Apollonius (Apollonius Gallus, Paris, 1600) is from memory.',
     },
   },
   excessNote: [
@@ -73,6 +74,7 @@ export default defineProblem({
     },
   ],
   drawing: {
+    projection: 'Drawn in the (x, y)-plane of the problem itself, with equal scales on both axes.',
     window: (p, items) => fitWindow([...givenCircles(p), ...(items ?? [])]),
     configuration: givenCircles,
     solution: ([D, E, F]) => {

@@ -11,7 +11,7 @@ import { naiveRunSentence } from './naive-run-note.ts';
 import { tangencyAlternateCharts } from './tangency-rechart.ts';
 import { isRealPoint } from '../../../src/engine/solve/real.ts';
 import type { TangencyShape } from './tangency-layout.ts';
-import { conicLadderSource } from './ladder-source.ts';
+import { conicLadderRungs, conicLadderSource, PLANE_PROJECTION } from './ladder-source.ts';
 
 /** Conics through p general points tangent to 5 − p general conics, p = 5…0 (Chasles 1864; Bashelor–Ksir–Traves 2008). */
 export const CONIC_LADDER: Readonly<Record<number, number>> = { 5: 1, 4: 6, 3: 36, 2: 184, 1: 816, 0: 3264 };
@@ -109,7 +109,7 @@ export function conicTangencyProblem(points: number, seeds: { generic: number; s
     },
     trueCount: {
       value: count,
-      source: conicLadderSource('The numbers 1, 6, 36, 184, 816, 3264 are Chasles’s (Comptes Rendus, 1864); 3264 corrected Steiner’s 7776 of 1848. Page range from memory.'),
+      source: conicLadderSource('The numbers 1, 6, 36, 184, 816, 3264 are Chasles’s (M. Chasles, Construction des coniques qui satisfont à cinq conditions, Comptes Rendus de l’Académie des Sciences de Paris 58 (1864), 297–308); 3264 corrected Steiner’s 7776 of 1848, the survey’s opening problem.'),
     },
     excessNote: k <= 2
       ? `None: with at most two tangency conditions the naive count $6^{${k}} = ${bound}$ is exact, because the conics through ${plural(points, 'general point')} form a family that misses the double lines.`
@@ -122,7 +122,9 @@ export function conicTangencyProblem(points: number, seeds: { generic: number; s
       { id: demo.id, kind: 'demo', label: demo.label, description: demo.description, seed: 17, parameters },
     ],
     solver: { kind: 'parameter-homotopy', expected: count, prepare },
+    ladders: conicLadderRungs(points, ['conics']),
     drawing: {
+      projection: PLANE_PROJECTION,
       window: (q, items) => fitWindow([...configuration(q), ...(items ?? []).filter((it) => it.layer !== 'solution')], 0.2),
       configuration,
       solution: (values, q) => {

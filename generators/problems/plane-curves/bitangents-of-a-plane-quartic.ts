@@ -98,8 +98,9 @@ export default defineProblem({
       authors: ['J. Plücker'],
       year: 1839,
       title: 'Theorie der algebraischen Curven',
-      venue: 'Adolph Marcus, Bonn',
-      note: 'Plücker’s formulas (1834) give ½d(d − 2)(d − 3)(d + 3) = 28 bitangents for d = 4; his 1839 book has the quartic with four ovals and 28 real bitangents. The real counts 28, 16, 8, 4 are Zeuthen’s (1873). Details from memory.',
+      venue: 'Bonn (1839)',
+      bib: { type: 'book', address: 'Bonn' },
+      note: 'The book’s formula for the double tangents of a curve of degree d without singular points, ½d(d − 2)(d² − 9), gives 28 for d = 4 (p. 211, as Cayley cites it in 1849). From memory, not re-read: that the book shows a quartic with four ovals and 28 real bitangents, its publisher (Adolph Marcus), and that the real counts 28, 16, 8, 4 are Zeuthen’s (1873).',
     },
   },
   excessNote: [
@@ -128,6 +129,7 @@ export default defineProblem({
   ],
   solver: { kind: 'multihomogeneous' },
   drawing: {
+      projection: 'Drawn in the (x, y)-plane of the curve itself, with equal scales on both axes; the curve is traced numerically from its equation.',
     window: () => view,
     configuration: curve,
     solution: ([m, k, alpha, beta], q) => {

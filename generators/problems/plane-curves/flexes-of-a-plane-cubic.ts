@@ -43,7 +43,8 @@ export default defineProblem({
       year: 1844,
       title: 'Über die Wendepuncte der Curven dritter Ordnung',
       venue: 'Journal für die reine und angewandte Mathematik 28 (1844), 97–107',
-      note: 'The flexes as the intersection with the Hessian curve; the count 3d(d − 2) is one of Plücker’s formulas. That exactly three flexes of a real smooth cubic are real is classical. Venue details from memory.',
+      bib: { type: 'article', journal: 'Journal für die reine und angewandte Mathematik', volume: '28', pages: '97--107' },
+      note: 'The flexes as the intersection with the Hessian curve; the count 3d(d − 2) for a curve of degree d was obtained by Plücker, and Hesse gave the theory in complete form in this paper (as an encyclopaedia article on curves that cites it says). Volume and pages are as one secondary citation gives them, not checked against the volume. That exactly three flexes of a real smooth cubic are real is classical (from memory).',
     },
   },
   excessNote: 'None: for a general cubic the curve and its Hessian meet transversally in $9$ points, all in the affine chart.',
@@ -59,6 +60,7 @@ export default defineProblem({
     },
   ],
   drawing: {
+      projection: 'Drawn in the (x, y)-plane of the curve itself, with equal scales on both axes; the curve is traced numerically from its equation.',
     window: () => view,
     configuration: curve,
     solution: ([x, y]) => [{ shape: 'point', x: x!, y: y!, layer: 'solution' }],

@@ -64,8 +64,10 @@ export default defineProblem({
       authors: ['H. Schubert'],
       year: 1879,
       title: 'Kalkül der abzählenden Geometrie',
-      venue: 'B. G. Teubner, Leipzig',
-      note: 'The number of lines meeting four general lines is the degree of the Grassmannian of lines in projective 3-space; details from memory.',
+      venue: 'Leipzig (1879); reprinted by Springer, Berlin (1979), edited by S. L. Kleiman',
+      url: 'https://archive.org/details/kalklderabzh00schuuoft',
+      bib: { type: 'book', address: 'Leipzig' },
+      note: 'Two lines meet four general lines: Schubert’s method counts them with the four lines moved into special position, where the solutions can be seen, and keeps the number (his principle of conservation of number). The reprint (ISBN 3-540-09233-1) and the linked scan of the 1879 edition are as a reference list that cites the book gives them; the publisher of 1879, B. G. Teubner, is from memory.',
     },
   },
   excessNote: [
@@ -85,6 +87,7 @@ export default defineProblem({
     },
   ],
   drawing: {
+    projection: 'Space is drawn by the oblique parallel projection (x, y, z) ↦ (x + 0.45z, y + 0.3z); the dots mark where each solution line meets wires 1 and 2.',
     window: (q, items) => fitWindow([...givenLines(q), ...(items ?? [])], 0.05),
     configuration: givenLines,
     solution: ([s, t], q) => {

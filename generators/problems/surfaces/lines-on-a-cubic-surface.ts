@@ -61,8 +61,10 @@ export default defineProblem({
       authors: ['A. Cayley'],
       year: 1849,
       title: 'On the triple tangent planes of surfaces of the third order',
-      venue: 'The Cambridge and Dublin Mathematical Journal 4 (1849), 118–132',
-      note: 'Cayley found that a cubic surface contains finitely many lines and Salmon, in a note in the same volume, that there are 27. The possible real counts 27, 15, 7, 3 are Schläfli’s (1863); all 27 real on the diagonal surface is Clebsch’s (1871). Page range from memory.',
+      venue: 'The Cambridge and Dublin Mathematical Journal 4 (1849), 118–132; reprinted as paper 76 in his Collected Mathematical Papers, vol. 1',
+      url: 'https://goobi.tib.eu/viewer/fulltext/1025197879/467',
+      bib: { type: 'article', journal: 'The Cambridge and Dublin Mathematical Journal', volume: '4', pages: '118--132' },
+      note: 'The link opens p. 446 of the reprint, where the count twenty-seven is derived from Salmon’s cone of degree six and Plücker’s formula for double tangents. From memory, not re-read: the page range of 1849, that Salmon’s part is a note in the same volume, and that the real counts 27, 15, 7, 3 are Schläfli’s (1863) and all 27 real on the diagonal surface is Clebsch’s (1871).',
     },
   },
   excessNote: [
@@ -90,6 +92,7 @@ export default defineProblem({
     },
   ],
   drawing: {
+    projection: 'Each line of the surface is drawn by its orthogonal projection onto the plane z = 0 (along the z-axis); the curve is the section of the surface by that plane.',
     window: () => view,
     configuration: slice,
     solution: ([a, b, c, d]) => {

@@ -15,7 +15,7 @@ function snapshot(dir: string): [string, string][] {
 }
 
 describe('regenerating with the real engine', () => {
-  it('gives byte-identical content twice, with or without workers, and a sharded solve merged gives the same record as a single run', async () => {
+  it('gives byte-identical content twice (record, page, system and certificates), with or without workers, and a sharded solve merged gives the same files as a single run', async () => {
     const dir = mkdtempSync(join(tmpdir(), 'atlas-regen-'));
     const file = join(dir, 'two-conics.ts');
     copyFileSync(TWO_CONICS, file);
@@ -28,7 +28,7 @@ describe('regenerating with the real engine', () => {
     ]);
     for (const run of [first, part1, part2, withWorkers]) expect(run.code, run.stderr).toBe(0);
     const once = snapshot(single);
-    expect(once.map(([f]) => f)).toEqual(['/problems/two-test-conics.mdx', '/records/two-test-conics.json']);
+    expect(once.map(([f]) => f)).toEqual(['/certificates/two-test-conics.json', '/problems/two-test-conics.mdx', '/records/two-test-conics.json', '/systems/two-test-conics.json']);
     const [second, merged] = await Promise.all([
       runCli(['regenerate', file, '--content', single]),
       runCli(['merge', join(dir, 'part-2.json'), join(dir, 'part-1.json'), '--content', sharded]),

@@ -3,16 +3,27 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { checkContent } from '../../../generators/write/check-content.ts';
-import { pagePath, recordPath } from '../../../generators/write/content-paths.ts';
+import { certificatesPath, pagePath, recordPath, systemsPath } from '../../../generators/write/content-paths.ts';
+import type { SolveRecord } from '../../../src/atlas/record.ts';
 import { publish } from '../../../generators/write/publish.ts';
 import { fakeRecord } from '../pipeline/fixtures/solved-fixture.ts';
 
 const SLUG = 'two-test-conics';
 
-/** A content root holding the published test problem, damaged by `damage`. */
+/** Sidecar files that agree with a record: one equation per degree, one box per solution (values are placeholders). */
+function sidecarsOf(record: SolveRecord) {
+  const unknowns = [...record.formulation.unknowns];
+  return {
+    systems: { slug: record.slug, unknowns, instances: record.instances.map((i) => ({ id: i.id, parameters: {}, equations: record.formulation.equationDegrees.map(() => 'x - 1') })) },
+    certificates: { slug: record.slug, unknowns, instances: record.instances.map((i) => ({ id: i.id, boxes: i.solutions.map(() => unknowns.map(() => [0, 1, 0, 1] as [number, number, number, number])) })) },
+  };
+}
+
+/** A content root holding the published test problem with its sidecar files, damaged by `damage`. */
 async function damaged(damage: (root: string) => void): Promise<string[]> {
   const root = mkdtempSync(join(tmpdir(), 'atlas-content-'));
-  publish(root, await fakeRecord(), { date: '2026-01-02' });
+  const record = await fakeRecord();
+  publish(root, record, { date: '2026-01-02' }, sidecarsOf(record));
   damage(root);
   return checkContent(root).errors;
 }
@@ -32,6 +43,9 @@ describe('checking content files', () => {
     ['a page edited by hand', (r: string) => edit(pagePath(r, SLUG), 'The problem', 'A problem'), /two-test-conics\.mdx: differs from what its record renders/],
     ['a record without its page', (r: string) => rmSync(pagePath(r, SLUG)), /two-test-conics\.json: has no page/],
     ['a page without its record', (r: string) => rmSync(recordPath(r, SLUG)), /two-test-conics\.mdx: has no record/],
+    ['a systems file missing an equation', (r: string) => edit(systemsPath(r, SLUG), /"x - 1",\n/, ''), /systems\/two-test-conics\.json: instances\.[a-z-]+\.equations: 1 equations for 2/],
+    ['a certificates file missing a box', (r: string) => edit(certificatesPath(r, SLUG), /\[\[0,1,0,1\],\[0,1,0,1\]\],\n/, ''), /certificates\/two-test-conics\.json: instances\.[a-z-]+\.boxes: 3 boxes for 4 solutions/],
+    ['a certificates file without a record', (r: string) => { rmSync(recordPath(r, SLUG)); rmSync(pagePath(r, SLUG)); }, /certificates\/two-test-conics\.json: has no record/],
   ])('names the file and field of %s', async (_name, damage, message) => {
     const errors = await damaged(damage);
     expect(errors.join('\n')).toMatch(message);
