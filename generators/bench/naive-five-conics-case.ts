@@ -12,7 +12,7 @@ export const naiveFiveConicsCase: BenchCase = {
   expected: 3264,
   async run() {
     const s = await naiveRun(fiveConics, 'generic', 1, 2);
-    process.stderr.write(`naive run: ${s.genuine} genuine conics (${s.genuinePaths} paths, ${s.relabelledPaths} relabelled), ${s.doubleLinePaths} paths on double lines, ${s.otherPaths} other, ${s.failedPaths} failed, ${s.seconds.toFixed(1)} s\n`);
+    process.stderr.write(`naive run: ${s.genuine} genuine conics (${s.genuinePaths} paths), ${s.excessPaths} excess (${s.doubleLinePaths} double lines), ${s.atInfinityPaths} at infinity, ${s.singularPaths} singular, ${s.failedPaths} failed, ${s.extendedPaths} re-tracked in double-double, ${s.seconds.toFixed(1)} s\n`);
     return { paths: s.paths, found: s.genuine, failedPaths: s.failedPaths };
   },
 };

@@ -16,7 +16,8 @@ async function solveSeeds(family: StressFamily, change: ChangeRecipe): Promise<B
     const s = stressSystem(family, change.make(family.unknowns, seed), seed);
     const r = await solveSystem(s.system, s.parameters, { seed, start: 'total-degree' });
     const st = r.stats;
-    process.stderr.write(`${s.name}: ${r.solutions.length}/${s.expected} found, ${st.failed} failed, ${st.singular} singular, ${st.atInfinity} at infinity, ${r.seconds.toFixed(2)} s\n`);
+    const jumps = r.retracks?.recoveredJumps ?? 0, extended = r.retracks?.extendedPaths ?? 0;
+    process.stderr.write(`${s.name}: ${r.solutions.length}/${s.expected} found, ${st.failed} failed, ${st.singular} singular, ${st.excess} excess, ${st.atInfinity} at infinity, ${jumps} jumps recovered, ${extended} re-tracked in double-double, ${r.seconds.toFixed(2)} s\n`);
     paths += st.tracked;
     found += r.solutions.length;
     failedPaths += st.failed;

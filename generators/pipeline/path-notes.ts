@@ -21,7 +21,7 @@ export function pathNotes(counts: Counts, paths: PathStats, kind: 'generic' | 'd
   const r = paths.retracks;
   if (r && r.jumpPaths > 0) notes.push(`${plural(r.jumpPaths, 'path')} re-tracked after a path jump (${r.recoveredJumps} recovered${r.unresolvedJumps > 0 ? `, ${r.unresolvedJumps} still shared` : ''})`);
   if (r && r.extendedPaths > 0) notes.push(`${plural(r.extendedPaths, 'path')} re-tracked in double-double precision (${r.extendedDecided} decided)`);
-  if (paths.retries > 0) notes.push(`${plural(paths.retries, "re-track")} with stricter settings`);
+  if (paths.retries > 0) notes.push(`${plural(paths.retries, 're-track')} in all (stricter steps or double-double precision)`);
   if (counts.certified < counts.found) notes.push(`${counts.found - counts.certified} of ${counts.found} solutions not certified`);
   return notes;
 }

@@ -3,9 +3,6 @@ import type { ProblemDefinition } from '../../../src/atlas/definition.ts';
 import { systemOf } from '../../../src/atlas/system-of.ts';
 import { parametersOf } from '../../../src/atlas/parameters-of.ts';
 import { solveSystem } from '../../../src/engine/solve/solve-system.ts';
-import { compileSystem } from '../../../src/engine/compile/compile-system.ts';
-import { createAffineTools } from '../../../src/engine/solve/affine.ts';
-import { createPointIndex } from '../../../src/engine/parameter/point-index.ts';
 
 /** Where the paths of the naive total-degree run on the sextic formulation ended (they add up to `paths`). */
 export interface NaiveRunSummary {
@@ -17,13 +14,15 @@ export interface NaiveRunSummary {
   /** Distinct nonsingular conics found, and the paths that reached them. */
   readonly genuine: number;
   readonly genuinePaths: number;
-  /** Of those, paths the tracker labelled singular whose end refines by Newton's method to a nonsingular conic. */
-  readonly relabelledPaths: number;
-  /** Other paths ending (singular, at infinity of the chart, or failed) at a double line: rank-one conic matrix. */
+  /** Paths the engine judged 'excess' (on a positive-dimensional solution set), and of those the ones at a double line. */
+  readonly excessPaths: number;
   readonly doubleLinePaths: number;
-  /** Paths ending elsewhere (neither a nonsingular conic nor a double line): should be 0. */
-  readonly otherPaths: number;
+  readonly singularPaths: number;
+  readonly atInfinityPaths: number;
   readonly failedPaths: number;
+  /** Paths re-tracked in double-double precision, and jumps recovered. */
+  readonly extendedPaths: number;
+  readonly recoveredJumps: number;
   readonly stepsMedian: number;
   readonly seconds: number;
   /** The rank-one test: largest 2×2 minor of the conic matrix ≤ this × (largest entry)². */
@@ -45,33 +44,21 @@ export function rankOneDefect(x: Float64Array): number {
 
 /**
  * Runs the naive total-degree homotopy on a conic problem's shown (sextic) formulation at one instance, on `workers`
- * workers, and classifies every path: nonsingular conic (a non-regular end counts when Newton's method refines it to a
- * nonsingular conic, condition < 1e10), double line (rank-one matrix, the excess component), or other.
+ * workers, and summarises where the paths ended, as the engine judged them; excess ends are also checked to be
+ * double lines (rank-one conic matrix, the excess component).
  */
 export async function naiveRun(definition: ProblemDefinition, instanceId: string, seed: number, workers: number, rankOneTolerance = 1e-4): Promise<NaiveRunSummary> {
   const instance = definition.instances.find((i) => i.id === instanceId);
   if (!instance) throw new Error(`problem "${definition.slug}": no instance "${instanceId}"`);
   const system = systemOf(definition), parameters = parametersOf(definition, instance);
   const report = await solveSystem(system, parameters, { seed, start: 'total-degree', workers });
-  const tools = createAffineTools(compileSystem(system), parameters);
-  const conics = createPointIndex(system.unknowns.length);
-  report.solutions.forEach((s) => conics.add(s.point));
-  const regularPaths = new Set(report.solutions.flatMap((x) => x.paths));
-  let genuinePaths = regularPaths.size, relabelledPaths = 0, doubleLinePaths = 0, otherPaths = 0;
-  report.ends.forEach((e: PathEnd, i) => {
-    if (regularPaths.has(i)) return;
-    if (rankOneDefect(e.point) <= rankOneTolerance) { doubleLinePaths++; return; }
-    const x = e.point.slice();
-    if (e.outcome !== 'failed' && tools.newton(x, 1e-13, 8) && tools.condition(x) < 1e10 && rankOneDefect(x) > rankOneTolerance) {
-      genuinePaths++; relabelledPaths++;
-      if (conics.find(x) < 0) conics.add(x);
-      return;
-    }
-    otherPaths++;
-  });
+  const excess = report.ends.filter((e: PathEnd) => e.outcome === 'excess');
   return {
     slug: definition.slug, instance: instanceId, seed, bezoutBound: report.bezoutBound, paths: report.ends.length,
-    genuine: conics.size, genuinePaths, relabelledPaths, doubleLinePaths, otherPaths, failedPaths: report.stats.failed,
+    genuine: report.solutions.length, genuinePaths: report.stats.regular,
+    excessPaths: excess.length, doubleLinePaths: excess.filter((e) => rankOneDefect(e.point) <= rankOneTolerance).length,
+    singularPaths: report.stats.singular, atInfinityPaths: report.stats.atInfinity, failedPaths: report.stats.failed,
+    extendedPaths: report.retracks?.extendedPaths ?? 0, recoveredJumps: report.retracks?.recoveredJumps ?? 0,
     stepsMedian: report.stats.stepsMedian, seconds: report.seconds, rankOneTolerance,
   };
 }

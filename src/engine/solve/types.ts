@@ -38,7 +38,7 @@ export interface PathStatistics {
   failures: Record<string, number>;
   stepsMedian: number;
   stepsMax: number;
-  /** Total re-tracks with stricter settings, over all paths. */
+  /** Total re-tracks (stricter settings, double-double precision), over all paths. */
   retries: number;
 }
 
