@@ -26,8 +26,10 @@ const NEWTON_MOVE = 1e-6;
  * large, and it is kept 'regular' only if it solves the target: Newton (relative 1e-13 in natural units, ≤ 5 iterations) moves
  * it ≤ 1e-6 to a backward error ≤ SOLVED_BACKWARD_ERROR with κ ≤ 1e14; else it is 'at-infinity' when it solves the
  * homogenised target (the tracker's residual ≤ ENDPOINT_RESIDUAL: a nonsingular root whose homogenising coordinate
- * the affine coordinates cannot tell from zero), or 'failed' ('no-convergence'), for the solver to re-track. A 'singular' finite end with backward error ≤ SOLVED_BACKWARD_ERROR and κ ≤ 1e6 is re-judged
- * 'regular' (the projective chart was badly scaled there). (A singular end's backward error says little: at a double
+ * the affine coordinates cannot tell from zero), or 'failed' ('no-convergence'), for the solver to re-track. A
+ * 'singular' or 'failed' finite end that Newton (relative 1e-13, ≤ 5 iterations) moves ≤ 1e-6 to a backward error ≤
+ * SOLVED_BACKWARD_ERROR with κ ≤ 1e6 is re-judged 'regular' (the projective chart was badly scaled there: measured on a
+ * dense sextic system, an end of affine κ 8.8 had κ 7e10 in its chart). (A singular end's backward error says little: at a double
  * root the attainable accuracy is 2⁻²⁶, where x² has backward error near 1; undecided singular ends are re-tracked by
  * the solver's review instead.) 'at-infinity' ends (and ends with some h_g = 0) carry the
  * direction (Y_0 … Y_{n−1}) / max_j |Y_j| in natural units. Residuals of finite ends are backward errors.
@@ -59,11 +61,20 @@ export function toAffineEnd(end: PathEnd, groups: readonly (readonly number[])[]
     return { ...end, outcome: 'failed', failure: 'no-convergence', point: x, residual: tools.residual(x), condition: tools.condition(x) };
   }
   const residual = tools.residual(x), condition = tools.condition(x);
-  if (end.outcome === 'singular' && residual <= SOLVED_BACKWARD_ERROR && condition <= CLEARLY_NONSINGULAR) {
-    // nonsingular after all: winding number 1 by the implicit function theorem
-    return { ...end, outcome: 'regular', windingNumber: 1, point: x, residual, condition };
+  if ((end.outcome === 'singular' || end.outcome === 'failed') && clearlyNonsingular(x, tools)) {
+    // nonsingular after all (the projective chart was badly scaled there): winding number 1 by the implicit function theorem
+    const { failure: _, ...rest } = end;
+    return { ...rest, outcome: 'regular', windingNumber: 1, point: x, residual, condition };
   }
   return { ...end, point: x, residual, condition };
+}
+
+/** Newton from (a copy of) x stays within 1e-6 and reaches backward error ≤ SOLVED_BACKWARD_ERROR with κ ≤ CLEARLY_NONSINGULAR. */
+function clearlyNonsingular(x: Float64Array, tools: AffineTools): boolean {
+  if (!(tools.residual(x) <= 1e-6)) return false;
+  const refined = Float64Array.from(x);
+  tools.newton(refined, 1e-13, 5);
+  return tools.distance(x, refined) <= NEWTON_MOVE && tools.residual(refined) <= SOLVED_BACKWARD_ERROR && tools.condition(refined) <= CLEARLY_NONSINGULAR;
 }
 
 /** The end with its point replaced by the direction (Y_0 … Y_{n−1}) / max_j |Y_j| (natural units). */
