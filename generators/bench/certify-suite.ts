@@ -1,17 +1,15 @@
-import { join } from 'node:path';
-import { COMMITTED_DIR, readStartSet } from '../problems/conics/start-set.ts';
+import { readCommittedTangencySet } from '../problems/conics/tangency-store.ts';
 import { tangencySystem } from '../problems/conics/tangency-system.ts';
 import { certifySolutionsParallel } from '../../src/engine/certify/certify-parallel.ts';
 import { prepareCertifier } from '../../src/engine/certify/certify-solutions.ts';
 import type { BenchCase } from './bench-case.ts';
 import { quadricsWithKnownSolutions } from './known-solution-quadrics.ts';
 
-const loaded = new Map<string, ReturnType<typeof readStartSet>>();
+const loaded = new Map<number, ReturnType<typeof readCommittedTangencySet>>();
 /** A committed generic solution set of the conic ladder (read once: reading refines each solution by Newton's method). */
-function startSet(points: number): ReturnType<typeof readStartSet> {
-  const stem = `start-${points}-points-${5 - points}-conics.json`;
-  let set = loaded.get(stem);
-  if (set === undefined) { set = readStartSet(join(COMMITTED_DIR, stem)); loaded.set(stem, set); }
+function startSet(points: number): ReturnType<typeof readCommittedTangencySet> {
+  let set = loaded.get(points);
+  if (set === undefined) { set = readCommittedTangencySet(points); loaded.set(points, set); }
   return set;
 }
 

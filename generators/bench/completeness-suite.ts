@@ -1,22 +1,21 @@
-import { join } from 'node:path';
 import { systemOf } from '../../src/atlas/system-of.ts';
 import { compileSystem } from '../../src/engine/compile/compile-system.ts';
 import { recoverByLoops, type LoopRecoveryReport } from '../../src/engine/complete/recover-by-loops.ts';
 import { runTraceTest, type TraceTestReport } from '../../src/engine/complete/trace-test.ts';
 import { createPoolLegTracker } from '../../src/engine/parameter/pool-tracker.ts';
 import { sharedPool } from '../../src/engine/pool/shared-pool.ts';
-import { COMMITTED_DIR, readStartSet, type StartSet } from '../problems/conics/start-set.ts';
+import { readCommittedTangencySet } from '../problems/conics/tangency-store.ts';
 import { tangencySystem } from '../problems/conics/tangency-system.ts';
 import fiveConics from '../problems/conics/conics-tangent-to-5-conics.ts';
 import type { BenchCase, BenchOutcome } from './bench-case.ts';
 
 const WORKERS = 2;
-const stored = new Map<string, StartSet>();
+type LadderSet = ReturnType<typeof readCommittedTangencySet>;
+const stored = new Map<number, LadderSet>();
 /** A committed generic set of the conic ladder (read once). */
-function ladder(points: number): StartSet {
-  const file = join(COMMITTED_DIR, `start-${points}-points-${5 - points}-conics.json`);
-  let set = stored.get(file);
-  if (set === undefined) { set = readStartSet(file); stored.set(file, set); }
+function ladder(points: number): LadderSet {
+  let set = stored.get(points);
+  if (set === undefined) { set = readCommittedTangencySet(points); stored.set(points, set); }
   return set;
 }
 /** Every tenth-or-so solution removed: `count` indices spread over the set. */

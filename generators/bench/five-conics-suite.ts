@@ -5,7 +5,8 @@ import { sharedPool } from '../../src/engine/pool/shared-pool.ts';
 import { createPoolLegTracker } from '../../src/engine/parameter/pool-tracker.ts';
 import { randomParameterPoint } from '../../src/engine/parameter/route.ts';
 import { solveByParameterHomotopy, type ParameterProblem, type ParameterSolveReport } from '../../src/engine/parameter/solve-by-parameter-homotopy.ts';
-import { buildStartSet } from '../problems/conics/start-set.ts';
+import { buildStoredSet } from '../problems/shared/stored-set.ts';
+import { tangencyStoreSpec } from '../problems/conics/tangency-store.ts';
 import fiveConics from '../problems/conics/conics-tangent-to-5-conics.ts';
 import type { BenchCase, BenchOutcome } from './bench-case.ts';
 
@@ -54,8 +55,8 @@ export const cases: BenchCase[] = [
     async run() {
       const k = instance++;
       const pool = await sharedPool(WORKERS);
-      const url = (await problem()).working.url;
-      const { monodromy } = await buildStartSet({ points: 0, conics: 5 }, 7000 + k, 3264, (chart) => createPoolLegTracker(pool, { url, constants: { points: 0, conics: 5, chart } }));
+      const spec = tangencyStoreSpec({ points: 0, conics: 5 }, 7000 + k, 3264);
+      const { monodromy } = await buildStoredSet(spec, (chart) => createPoolLegTracker(pool, { url: spec.homotopy.url, constants: spec.homotopy.constants(chart) }));
       const m = monodromy.stats;
       process.stderr.write(`monodromy: ${monodromy.solutions.length} (${monodromy.stop}), ${m.paths} paths, ${m.failedPaths} failed, ${m.jumps} jumps (${m.unresolvedJumps} unresolved), ${m.nodes} nodes, ${m.edges} edges, ${m.rounds} rounds\n`);
       return { paths: m.paths, found: monodromy.solutions.length, failedPaths: m.failedPaths, steps: m.steps };

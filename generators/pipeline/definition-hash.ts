@@ -1,4 +1,5 @@
-import { readFileSync } from 'node:fs';
+import { existsSync, readFileSync } from 'node:fs';
+import { createHash } from 'node:crypto';
 import { dirname, relative, resolve, sep } from 'node:path';
 import { sha256Hex } from '../../src/atlas/hash.ts';
 import { RECORD_SCHEMA_VERSION } from '../../src/atlas/record.ts';
@@ -11,8 +12,10 @@ const RELATIVE_IMPORT = /(?:\bfrom\s*|\bimport\s*\(?\s*)(['"])(\.{1,2}\/[^'"]+)\
  * the source text of the definition module and of every module it reaches through relative imports, each under its
  * path relative to the definition's folder, in sorted order. Imports into src/ (engine, atlas) are left out: the
  * engine is tracked by the record's engineVersion. Editing a definition or a helper it imports makes it stale.
+ * `reads` (the definition's data files read at run time) add, in sorted order, each file's relative path and the
+ * SHA-256 of its bytes (or "missing"), so changing a stored solution set makes the problems that read it stale.
  */
-export function definitionHash(file: string): string {
+export function definitionHash(file: string, reads: readonly string[] = []): string {
   const base = dirname(file);
   const texts = new Map<string, string>();
   const queue = [resolve(file)];
@@ -27,5 +30,11 @@ export function definitionHash(file: string): string {
     }
   }
   const parts = [...texts].map(([path, text]) => [relative(base, path).split(sep).join('/'), text] as const).sort(([a], [b]) => (a < b ? -1 : 1));
-  return sha256Hex('atlas-definition-hash/1', String(RECORD_SCHEMA_VERSION), ...parts.flat());
+  const data = [...new Set(reads)].map((path) => [relative(base, path).split(sep).join('/'), bytesDigest(path)] as const).sort(([a], [b]) => (a < b ? -1 : 1));
+  return sha256Hex('atlas-definition-hash/1', String(RECORD_SCHEMA_VERSION), ...parts.flat(), ...(data.length > 0 ? ['reads', ...data.flat()] : []));
+}
+
+/** SHA-256 of a file's bytes as hex, or "missing". */
+function bytesDigest(path: string): string {
+  return existsSync(path) ? createHash('sha256').update(readFileSync(path)).digest('hex') : 'missing';
 }

@@ -42,7 +42,7 @@ export async function loadDefinitionFile(path: string): Promise<LoadedDefinition
 export function checked(candidate: unknown, file: string): LoadedDefinition {
   const check = validateDefinition(candidate);
   if (!check.ok) throw new AtlasError('input', formatIssues(displayPath(file), check.issues));
-  return { definition: check.definition, system: check.system, file, hash: definitionHash(file) };
+  return { definition: check.definition, system: check.system, file, hash: definitionHash(file, check.definition.reads) };
 }
 
 /** Imports a module, turning a load failure (syntax error, missing import) into AtlasError('input') with the file and line. */

@@ -97,6 +97,11 @@ export interface ProblemDefinition {
   readonly instances: readonly InstanceDefinition[];
   /** Defaults to total degree. */
   readonly solver?: SolverChoice;
+  /**
+   * Data files the solver reads at run time (absolute paths; stored solution sets, say): their bytes enter the
+   * definition hash, so changing one makes `refresh` re-solve this problem. A listed file that is missing hashes as missing.
+   */
+  readonly reads?: readonly string[];
   readonly drawing?: DrawingDefinition;
   /** The ladders this problem is a rung of, for links between the rungs. */
   readonly ladders?: readonly LadderMembership[];

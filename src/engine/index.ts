@@ -24,3 +24,13 @@ export { runTraceTest, TRACE_TOLERANCE, type TraceTestOptions, type TraceTestRep
 export type { RecoveredSolution } from './complete/recovered.ts';
 export type { FibreAtStart } from './complete/pencil-ends.ts';
 export type { PencilHyperplane } from './complete/trace-pencil.ts';
+// Parameter homotopy from stored solution sets, monodromy, and the pieces families build on (added with issue 10).
+export { createStepper, type Stepper } from './track/stepper.ts';
+export { solveByParameterHomotopy, type ParameterProblem, type ParameterSolveOptions, type ParameterSolveReport, type AlternateCharts } from './parameter/solve-by-parameter-homotopy.ts';
+export type { HomotopyModuleRef } from './parameter/module-tracker.ts';
+export type { ParameterLeg } from './parameter/gamma-arc.ts';
+export { randomGamma, type LegTracker } from './parameter/route.ts';
+export { createInProcessLegTracker } from './parameter/in-process-tracker.ts';
+export { createPoolLegTracker } from './parameter/pool-tracker.ts';
+export { createHomotopy as createCompiledLegHomotopy, COMPILED_LEG_MODULE, type CompiledLegConstants } from './parameter/compiled-leg-module.ts';
+export { discoverByMonodromy, type MonodromyResult, type MonodromyOptions, type MonodromyStop } from './monodromy/discover.ts';

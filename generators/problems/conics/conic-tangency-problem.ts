@@ -1,20 +1,18 @@
 import type { ComplexInput, ProblemDefinition } from '../../../src/atlas/definition.ts';
 import type { FigureItem } from '../../../src/atlas/figure.ts';
-import type { ParameterProblem } from '../../../src/engine/parameter/solve-by-parameter-homotopy.ts';
 import { fitWindow } from '../shared/fit-window.ts';
 import { normalizeByLargest } from '../shared/normalize.ts';
 import { CONIC_LETTERS, parameterNames } from './conic-names.ts';
 import { tangencyPoint, type ConicCoefficients } from './conic-geometry.ts';
 import { tangencyDiscriminant } from './sextic-formulation.ts';
-import { loadStartSet } from './start-set.ts';
+import { storedSetReads, storedSetSolver } from '../shared/stored-set.ts';
+import { CONIC_LADDER, tangencyStoreSpec } from './tangency-store.ts';
 import { naiveRunSentence } from './naive-run-note.ts';
-import { tangencyAlternateCharts } from './tangency-rechart.ts';
-import { isRealPoint } from '../../../src/engine/solve/real.ts';
+import { isRealPoint } from '../../../src/engine/index.ts';
 import type { TangencyShape } from './tangency-layout.ts';
 import { conicLadderRungs, conicLadderSource, PLANE_PROJECTION } from './ladder-source.ts';
 
-/** Conics through p general points tangent to 5 − p general conics, p = 5…0 (Chasles 1864; Bashelor–Ksir–Traves 2008). */
-export const CONIC_LADDER: Readonly<Record<number, number>> = { 5: 1, 4: 6, 3: 36, 2: 184, 1: 816, 0: 3264 };
+export { CONIC_LADDER } from './tangency-store.ts';
 
 /**
  * A fixed real affine chart of the P⁵ of conics (our own arbitrary numbers): the shown solution has Σ hₖ·coefₖ = 1.
@@ -69,17 +67,7 @@ export function conicTangencyProblem(points: number, seeds: { generic: number; s
     ...Array.from({ length: k }, (_, i): FigureItem => ({ shape: 'conic', coefficients: givenConic(q, i + 1), layer: 'given', label: `conic ${i + 1}` })),
     ...Array.from({ length: points }, (_, j): FigureItem => ({ shape: 'point', x: q[`x${j + 1}`]!, y: q[`y${j + 1}`]!, layer: 'given', label: `point ${j + 1}` })),
   ];
-  const prepare = async (shown: ParameterProblem['shown']): Promise<ParameterProblem> => {
-    const set = await loadStartSet(shape, seeds.start, count);
-    return {
-      shown,
-      working: { url: new URL('./tangency-homotopy.ts', import.meta.url).href, constants: { points, conics: k, chart: set.chart }, settings: { retries: 1, estimateCorrectorError: true } }, // one stricter retry; a path that still fails is re-tracked in another chart
-      start: { parameters: set.parameters, solutions: set.solutions },
-      toShown: toShownChart,
-      isReal: (shown) => isRealPoint(normalizeByLargest(shown)),
-      alternateCharts: tangencyAlternateCharts(shape, seeds.start),
-    };
-  };
+  const store = tangencyStoreSpec(shape, seeds.start, count);
   const through = points === 0 ? '' : `passing through ${plural(points, 'general point')} $(x_j, y_j)$ and `;
   return {
     slug: conicLadderSlug(points),
@@ -121,7 +109,8 @@ export function conicTangencyProblem(points: number, seeds: { generic: number; s
       { id: 'generic', kind: 'generic', label: 'Random complex data', description: 'Points and conics with coefficients drawn as random complex numbers from the recorded seed.', seed: seeds.generic },
       { id: demo.id, kind: 'demo', label: demo.label, description: demo.description, seed: 17, parameters },
     ],
-    solver: { kind: 'parameter-homotopy', expected: count, prepare },
+    solver: storedSetSolver(store, { toShown: toShownChart, isReal: (shown) => isRealPoint(normalizeByLargest(shown)) }),
+    reads: storedSetReads(store),
     ladders: conicLadderRungs(points, ['conics']),
     drawing: {
       projection: PLANE_PROJECTION,

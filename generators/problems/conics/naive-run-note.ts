@@ -1,6 +1,6 @@
 import { existsSync, readFileSync } from 'node:fs';
 import { join } from 'node:path';
-import { COMMITTED_DIR } from './start-set.ts';
+import { TANGENCY_SETS_DIR as COMMITTED_DIR } from './tangency-store.ts';
 
 /**
  * One sentence for the five-conic page on the committed naive run (write-naive-summary.ts): where the 7776 paths of

@@ -1,7 +1,4 @@
-import { createRandom } from '../../../src/engine/random.ts';
-import type { AlternateCharts } from '../../../src/engine/parameter/solve-by-parameter-homotopy.ts';
 import { cross3 } from './conic-kernels.ts';
-import { randomChart } from './tangency-seed.ts';
 import { pointOf, unknownCount, type TangencyShape } from './tangency-layout.ts';
 
 /** (a·b) for packed complex m-vectors, bilinear, written to out[0..1]. */
@@ -49,12 +46,4 @@ export function convertChart(shape: TangencyShape, x: Float64Array, from: Float6
     [out[2 * (7 + 2 * i)], out[2 * (7 + 2 * i) + 1]] = divide(t[0]!, t[1]!, den[0]!, den[1]!);
   }
   return out;
-}
-
-/** Alternate charts for the engine's chart retries: the k-th is randomChart from seed·1000 + k. */
-export function tangencyAlternateCharts(shape: TangencyShape, seed: number): AlternateCharts {
-  return {
-    constants: (k) => ({ ...shape, chart: randomChart(shape, createRandom(seed * 1000 + k)) }),
-    convert: (x, from, to) => convertChart(shape, x, from.chart as Float64Array, to.chart as Float64Array),
-  };
 }

@@ -3,7 +3,7 @@ import { writeFileSync, renameSync } from 'node:fs';
 import { join } from 'node:path';
 import { closeSharedPool } from '../../../src/engine/pool/shared-pool.ts';
 import { ENGINE_VERSION } from '../../../src/engine/version.ts';
-import { COMMITTED_DIR } from './start-set.ts';
+import { TANGENCY_SETS_DIR as COMMITTED_DIR } from './tangency-store.ts';
 import { naiveRun } from './naive-run.ts';
 import fiveConics from './conics-tangent-to-5-conics.ts';
 

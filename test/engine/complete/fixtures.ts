@@ -1,5 +1,4 @@
 // Problems with published counts and their complete solution sets, shared by the completeness tests.
-import { join } from 'node:path';
 import type { PolynomialSystem } from '../../../src/engine/expr/node.ts';
 import type { ProblemDefinition } from '../../../src/atlas/definition.ts';
 import { systemOf } from '../../../src/atlas/system-of.ts';
@@ -8,7 +7,7 @@ import { solveSystem } from '../../../src/engine/solve/solve-system.ts';
 import twoConics from '../../../generators/problems/intersections/points-common-to-two-conics.ts';
 import twoCubics from '../../../generators/problems/intersections/points-common-to-two-cubics.ts';
 import apollonius from '../../../generators/problems/circles/circles-tangent-to-three-circles.ts';
-import { COMMITTED_DIR, readStartSet } from '../../../generators/problems/conics/start-set.ts';
+import { readCommittedTangencySet } from '../../../generators/problems/conics/tangency-store.ts';
 import { tangencySystem } from '../../../generators/problems/conics/tangency-system.ts';
 
 /** A parametric system at an instance with all its solutions. */
@@ -40,7 +39,7 @@ export const apolloniusGeneric = (): Promise<SolvedInstance> => solvedInstance(a
  * set in the tangency-point formulation (found by monodromy and stored; its count is checked by the caller).
  */
 export function ladderThirtySix(): SolvedInstance {
-  const set = readStartSet(join(COMMITTED_DIR, 'start-3-points-2-conics.json'));
+  const set = readCommittedTangencySet(3);
   return { label: 'conics through 3 points tangent to 2 conics (stored set)', system: tangencySystem(set.shape, set.chart), parameters: set.parameters, solutions: set.solutions };
 }
 

@@ -44,6 +44,25 @@ describe('refresh', () => {
   });
 });
 
+describe('refresh with data files read at run time', () => {
+  it('re-solves a problem when a stored set it reads changes, and only then', async () => {
+    const w = workspace();
+    const stored = join(w.problems, 'intersections', 'data', 'stored.f32');
+    mkdirSync(join(w.problems, 'intersections', 'data'));
+    writeFileSync(stored, new Uint8Array([0, 0, 128, 63]));
+    writeFileSync(w.definition, readFileSync(w.definition, 'utf8').replace('export default {', "export default {\n  reads: [new URL('./data/stored.f32', import.meta.url).pathname],"));
+    await runCommand(['refresh', '--content', w.content], fakeContext({ problemsDir: w.problems }).ctx);
+    const unchanged = fakeContext({ problemsDir: w.problems });
+    expect(await runCommand(['refresh', '--content', w.content], unchanged.ctx)).toBe(0);
+    expect(unchanged.loads()).toBe(0);
+    writeFileSync(stored, new Uint8Array([0, 0, 0, 64]));
+    const changed = fakeContext({ problemsDir: w.problems });
+    expect(await runCommand(['refresh', '--content', w.content], changed.ctx)).toBe(0);
+    expect(changed.stderr.text).toMatch(/two-test-conics: stale \(definition changed\); solving/);
+    expect(changed.loads()).toBe(1);
+  });
+});
+
 describe('check', () => {
   it('passes fresh content, and notes a stale record without failing', async () => {
     const w = workspace();

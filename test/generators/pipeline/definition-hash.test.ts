@@ -26,6 +26,20 @@ describe('the definition hash', () => {
     expect(hashOf(files)).not.toBe(hashOf(base));
   });
 
+  it.each([
+    ['a file it reads changes', 'stored.bin', new Uint8Array([1, 2, 4])],
+    ['a file it reads goes missing', 'other.bin', null],
+  ])('changes when %s', (_name, file, bytes) => {
+    const dir = mkdtempSync(join(tmpdir(), 'atlas-hash-'));
+    for (const [name, text] of Object.entries(base)) writeFileSync(join(dir, name), text);
+    writeFileSync(join(dir, 'stored.bin'), new Uint8Array([1, 2, 3]));
+    const reads = [join(dir, 'stored.bin')];
+    const before = definitionHash(join(dir, 'problem.ts'), reads);
+    expect(before).not.toBe(definitionHash(join(dir, 'problem.ts')));
+    if (bytes) writeFileSync(join(dir, file), bytes);
+    expect(definitionHash(join(dir, 'problem.ts'), bytes ? reads : [join(dir, file)])).not.toBe(before);
+  });
+
   it('does not change when an unrelated file in the folder changes', () => {
     expect(hashOf({ ...base, 'other.ts': 'x' })).toBe(hashOf(base));
   });
