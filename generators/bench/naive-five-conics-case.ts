@@ -1,5 +1,5 @@
 import fiveConics from '../problems/conics/conics-tangent-to-5-conics.ts';
-import { naiveRun } from '../problems/conics/naive-run.ts';
+import { naiveRun } from './naive-run.ts';
 import type { BenchCase } from './bench-case.ts';
 
 /**

@@ -17,7 +17,7 @@ export interface TangencyHomotopyArgs extends TangencyShape {
  * (see tangency-layout.ts for the layout). Why this formulation and not the 5-unknown sextic one: its degrees are
  * ≤ 3 and the given conics enter linearly, and its paths stay away from the double-line conics, where the sextic
  * form's Jacobian degenerates: a parameter homotopy on it lost 7–15 of 3264 solutions per instance in the project's
- * first measurements, and the naive total-degree run on it finds 3255 of 3264 (data/naive-run-…json), while this form
+ * first measurements, and the naive total-degree run on it then found 3255 of 3264 (today's figures: naive-run-figures.ts), while this form
  * found 3264 of 3264 on every instance measured (20 random, the real demo);
  * the Jacobian is an arrowhead (u shared, one 3×2 block per tangency point), so a linear solve costs a 6×6 LU.
  * The blocks are straight-line complex arithmetic: 0.8 µs per evaluation against 2.3 µs with small kernel calls

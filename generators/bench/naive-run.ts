@@ -1,32 +1,13 @@
-import type { PathEnd } from '../../../src/engine/homotopy.ts';
-import type { ProblemDefinition } from '../../../src/atlas/definition.ts';
-import { systemOf } from '../../../src/atlas/system-of.ts';
-import { parametersOf } from '../../../src/atlas/parameters-of.ts';
-import { solveSystem } from '../../../src/engine/solve/solve-system.ts';
+import type { ProblemDefinition } from '../../src/atlas/definition.ts';
+import { systemOf } from '../../src/atlas/system-of.ts';
+import { parametersOf } from '../../src/atlas/parameters-of.ts';
+import { ENGINE_VERSION, solveSystem, type PathEnd } from '../../src/engine/index.ts';
+import type { NaiveRunFigures } from '../problems/conics/naive-run-figures.ts';
 
-/** Where the paths of the naive total-degree run on the sextic formulation ended (they add up to `paths`). */
-export interface NaiveRunSummary {
-  readonly slug: string;
-  readonly instance: string;
-  readonly seed: number;
-  readonly bezoutBound: number;
-  readonly paths: number;
-  /** Distinct nonsingular conics found, and the paths that reached them. */
-  readonly genuine: number;
-  readonly genuinePaths: number;
-  /** Paths the engine judged 'excess' (on a positive-dimensional solution set), and of those the ones at a double line. */
-  readonly excessPaths: number;
-  readonly doubleLinePaths: number;
-  readonly singularPaths: number;
-  readonly atInfinityPaths: number;
-  readonly failedPaths: number;
-  /** Paths re-tracked in double-double precision, and jumps recovered. */
-  readonly extendedPaths: number;
-  readonly recoveredJumps: number;
+/** The figures of one naive run plus what is measured but not shown: the median steps per path and the seconds. */
+export interface NaiveRunSummary extends NaiveRunFigures {
   readonly stepsMedian: number;
   readonly seconds: number;
-  /** The rank-one test: largest 2×2 minor of the conic matrix ≤ this × (largest entry)². */
-  readonly rankOneTolerance: number;
 }
 
 /** max |2×2 minor| / max |entry|² of the symmetric conic matrix of a packed complex (a, …, f): 0 exactly on double lines. */
@@ -54,11 +35,11 @@ export async function naiveRun(definition: ProblemDefinition, instanceId: string
   const report = await solveSystem(system, parameters, { seed, start: 'total-degree', workers });
   const excess = report.ends.filter((e: PathEnd) => e.outcome === 'excess');
   return {
-    slug: definition.slug, instance: instanceId, seed, bezoutBound: report.bezoutBound, paths: report.ends.length,
+    slug: definition.slug, instance: instanceId, seed, engineVersion: ENGINE_VERSION, paths: report.ends.length,
     genuine: report.solutions.length, genuinePaths: report.stats.regular,
     excessPaths: excess.length, doubleLinePaths: excess.filter((e) => rankOneDefect(e.point) <= rankOneTolerance).length,
     singularPaths: report.stats.singular, atInfinityPaths: report.stats.atInfinity, failedPaths: report.stats.failed,
     extendedPaths: report.retracks?.extendedPaths ?? 0, recoveredJumps: report.retracks?.recoveredJumps ?? 0,
-    stepsMedian: report.stats.stepsMedian, seconds: report.seconds, rankOneTolerance,
+    rankOneTolerance, stepsMedian: report.stats.stepsMedian, seconds: report.seconds,
   };
 }
