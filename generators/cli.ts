@@ -10,7 +10,7 @@ const code = await runCommand(process.argv.slice(2), {
   stdout: process.stdout,
   stderr: process.stderr,
   loadEngine: async () => { const engine = await loadEngine(); loaded.push(engine); return engine; },
-  engineVersion: async () => (await import('../src/engine/version.ts')).ENGINE_VERSION,
+  engineVersion: async () => (await import('../src/engine/index.ts')).ENGINE_VERSION,
   now: () => performance.now(),
 });
 await Promise.all(loaded.map((engine) => engine.close?.()));

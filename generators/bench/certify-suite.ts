@@ -1,7 +1,6 @@
 import { readCommittedTangencySet } from '../problems/conics/tangency-store.ts';
 import { tangencySystem } from '../problems/conics/tangency-system.ts';
-import { certifySolutionsParallel } from '../../src/engine/certify/certify-parallel.ts';
-import { prepareCertifier } from '../../src/engine/certify/certify-solutions.ts';
+import { certifySolutionsParallel, prepareCertifier } from '../../src/engine/index.ts';
 import type { BenchCase } from './bench-case.ts';
 import { quadricsWithKnownSolutions } from './known-solution-quadrics.ts';
 

@@ -1,9 +1,5 @@
 import { systemOf } from '../../src/atlas/system-of.ts';
-import { compileSystem } from '../../src/engine/compile/compile-system.ts';
-import { recoverByLoops, type LoopRecoveryReport } from '../../src/engine/complete/recover-by-loops.ts';
-import { runTraceTest, type TraceTestReport } from '../../src/engine/complete/trace-test.ts';
-import { createPoolLegTracker } from '../../src/engine/parameter/pool-tracker.ts';
-import { sharedPool } from '../../src/engine/pool/shared-pool.ts';
+import { compileSystem, createPoolLegTracker, type LoopRecoveryReport, recoverByLoops, runTraceTest, sharedPool, type TraceTestReport } from '../../src/engine/index.ts';
 import { readCommittedTangencySet } from '../problems/conics/tangency-store.ts';
 import { tangencySystem } from '../problems/conics/tangency-system.ts';
 import fiveConics from '../problems/conics/conics-tangent-to-5-conics.ts';

@@ -1,7 +1,5 @@
 import { availableParallelism } from 'node:os';
-import type { PolynomialSystem } from '../../src/engine/expr/node.ts';
-import { solveSystem, type SolveOptions } from '../../src/engine/solve/solve-system.ts';
-import { createRandom } from '../../src/engine/random.ts';
+import { createRandom, type PolynomialSystem, type SolveOptions, solveSystem } from '../../src/engine/index.ts';
 import type { BenchCase, BenchOutcome } from './bench-case.ts';
 import { bitangents, linesOnCubic, randomSystem } from './engine-systems.ts';
 

@@ -1,6 +1,6 @@
-import type { ExprNode, PolynomialSystem } from '../../src/engine/expr/node.ts';
-import { add, constant, mul, pow, sub, unknown } from '../../src/engine/expr/build.ts';
-import type { RandomSource } from '../../src/engine/random.ts';
+import { exprBuilders, type ExprNode, type PolynomialSystem, type RandomSource } from '../../src/engine/index.ts';
+
+const { add, constant, mul, pow, sub, unknown } = exprBuilders;
 
 /** A polynomial in one variable u with expression coefficients (index = power of u). */
 type UPoly = ExprNode[];

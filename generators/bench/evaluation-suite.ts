@@ -1,6 +1,4 @@
-import { compileSystem, type CompiledEquations } from '../../src/engine/compile/compile-system.ts';
-import { compileValuesInDoubleDouble, type DoubleDoubleValues } from '../../src/engine/dd/compile-values.ts';
-import { createRandom } from '../../src/engine/random.ts';
+import { type CompiledEquations, compileSystem, compileValuesInDoubleDouble, createRandom, type DoubleDoubleValues } from '../../src/engine/index.ts';
 import { tangencySystem } from '../problems/conics/tangency-system.ts';
 import { randomChart, tangencySeed } from '../problems/conics/tangency-seed.ts';
 import type { BenchCase } from './bench-case.ts';

@@ -1,10 +1,6 @@
 import { systemOf } from '../../src/atlas/system-of.ts';
 import { parametersOf } from '../../src/atlas/parameters-of.ts';
-import { createRandom } from '../../src/engine/random.ts';
-import { sharedPool } from '../../src/engine/pool/shared-pool.ts';
-import { createPoolLegTracker } from '../../src/engine/parameter/pool-tracker.ts';
-import { randomParameterPoint } from '../../src/engine/parameter/route.ts';
-import { solveByParameterHomotopy, type ParameterProblem, type ParameterSolveReport } from '../../src/engine/parameter/solve-by-parameter-homotopy.ts';
+import { createPoolLegTracker, createRandom, type ParameterProblem, type ParameterSolveReport, randomParameterPoint, sharedPool, solveByParameterHomotopy } from '../../src/engine/index.ts';
 import { buildStoredSet } from '../problems/shared/stored-set.ts';
 import { tangencyStoreSpec } from '../problems/conics/tangency-store.ts';
 import fiveConics from '../problems/conics/conics-tangent-to-5-conics.ts';

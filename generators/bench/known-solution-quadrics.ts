@@ -1,6 +1,6 @@
-import { add, mul, param, unknown } from '../../src/engine/expr/build.ts';
-import type { ExprNode, PolynomialSystem } from '../../src/engine/expr/node.ts';
-import { createRandom } from '../../src/engine/random.ts';
+import { createRandom, exprBuilders, type ExprNode, type PolynomialSystem } from '../../src/engine/index.ts';
+
+const { add, mul, param, unknown } = exprBuilders;
 
 /**
  * A square system of n dense quadrics (every monomial of degree ≤ 2, coefficients as parameters) with `count` chosen

@@ -3,7 +3,7 @@
 // prints a table, or with --json ONLY a JSON array of {name, cores, runs, medianSeconds, paths, found, expected, failedPaths}.
 import { readdirSync } from 'node:fs';
 import { availableParallelism } from 'node:os';
-import { closeSharedPool } from '../../src/engine/pool/shared-pool.ts';
+import { closeSharedPool } from '../../src/engine/index.ts';
 import type { BenchCase, BenchOutcome } from './bench-case.ts';
 import { parseBenchArguments } from './bench-arguments.ts';
 import { formatTable, sortedMedian, type BenchRow } from './bench-table.ts';

@@ -1,4 +1,4 @@
-import { solveSystem } from '../../src/engine/solve/solve-system.ts';
+import { solveSystem } from '../../src/engine/index.ts';
 import type { BenchCase, BenchOutcome } from './bench-case.ts';
 import { naiveFiveConicsCase } from './naive-five-conics-case.ts';
 import { stressSystem } from './stress/stress-system.ts';

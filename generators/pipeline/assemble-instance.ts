@@ -1,6 +1,6 @@
 import type { InstanceDefinition, ProblemDefinition } from '../../src/atlas/definition.ts';
 import type { Completeness, InstanceResult, PathStats, Solution } from '../../src/atlas/record.ts';
-import type { PolynomialSystem } from '../../src/engine/expr/node.ts';
+import type { PolynomialSystem } from '../../src/engine/index.ts';
 import { coordinatesOf, isRealValues } from './coordinates-of.ts';
 import type { EngineReport, EngineServices } from './engine-services.ts';
 import { figureOf } from './figure-of.ts';

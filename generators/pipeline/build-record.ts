@@ -1,6 +1,6 @@
 import type { InstanceResult, SolveRecord, HistoryEntry } from '../../src/atlas/record.ts';
 import { RECORD_SCHEMA_VERSION } from '../../src/atlas/record.ts';
-import { degree } from '../../src/engine/expr/degree.ts';
+import { degree } from '../../src/engine/index.ts';
 import type { LoadedDefinition } from './load-definition.ts';
 
 /** The solve record of a problem from its loaded definition, the engine version and its instances' results. */

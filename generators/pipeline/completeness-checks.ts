@@ -1,4 +1,4 @@
-import type { PolynomialSystem } from '../../src/engine/expr/node.ts';
+import type { PolynomialSystem } from '../../src/engine/index.ts';
 import type { Completeness } from '../../src/atlas/record.ts';
 import type { CompletenessReport } from './engine-services.ts';
 

@@ -1,5 +1,4 @@
-import type { PathEnd } from '../../src/engine/homotopy.ts';
-import type { PolynomialSystem } from '../../src/engine/expr/node.ts';
+import type { PathEnd, PolynomialSystem } from '../../src/engine/index.ts';
 import type { ProblemDefinition } from '../../src/atlas/definition.ts';
 import type { Completeness, RetrackStats } from '../../src/atlas/record.ts';
 

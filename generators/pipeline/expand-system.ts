@@ -1,4 +1,4 @@
-import type { ExprNode } from '../../src/engine/expr/node.ts';
+import type { ExprNode } from '../../src/engine/index.ts';
 
 /** A polynomial in n unknowns: exponent vector (joined by ",") → complex coefficient [re, im]. */
 export type Polynomial = Map<string, [number, number]>;

@@ -2,7 +2,7 @@ import { existsSync, readdirSync, statSync } from 'node:fs';
 import { isAbsolute, join, relative, resolve, basename } from 'node:path';
 import { pathToFileURL } from 'node:url';
 import type { ProblemDefinition } from '../../src/atlas/definition.ts';
-import type { PolynomialSystem } from '../../src/engine/expr/node.ts';
+import type { PolynomialSystem } from '../../src/engine/index.ts';
 import { validateDefinition } from '../../src/atlas/validate-definition.ts';
 import { formatIssues } from '../../src/atlas/validation-issue.ts';
 import { AtlasError } from './atlas-error.ts';

@@ -1,4 +1,4 @@
-import type { PathEnd } from '../../src/engine/homotopy.ts';
+import type { PathEnd } from '../../src/engine/index.ts';
 import type { InstanceResult } from '../../src/atlas/record.ts';
 import { AtlasError } from './atlas-error.ts';
 import { assembleInstance } from './assemble-instance.ts';

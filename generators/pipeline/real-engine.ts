@@ -10,15 +10,8 @@ import { AtlasError } from './atlas-error.ts';
  * To add a strategy (monodromy, say), add one entry to `strategies` below.
  */
 export async function loadEngine(): Promise<EngineServices> {
-  const [{ solveSystem, finishSolve }, { certifySolutions }, { certifySolutionsParallel, closeCertifyWorkers }, { ENGINE_VERSION }, { solveByParameterHomotopy }, { createPoolLegTracker }, { sharedPool, closeSharedPool }] = await Promise.all([
-    import('../../src/engine/solve/solve-system.ts'),
-    import('../../src/engine/certify/certify-solutions.ts'),
-    import('../../src/engine/certify/certify-parallel.ts'),
-    import('../../src/engine/version.ts'),
-    import('../../src/engine/parameter/solve-by-parameter-homotopy.ts'),
-    import('../../src/engine/parameter/pool-tracker.ts'),
-    import('../../src/engine/pool/shared-pool.ts'),
-  ]);
+  const engineSurface = await import('../../src/engine/index.ts');
+  const { solveSystem, finishSolve, certifySolutions, certifySolutionsParallel, closeCertifyWorkers, ENGINE_VERSION, solveByParameterHomotopy, createPoolLegTracker, sharedPool, closeSharedPool } = engineSurface;
   const startSystem = (start: 'total-degree' | 'multihomogeneous', label: string): SolveStrategy => ({
     label,
     shardable: true,
@@ -45,7 +38,7 @@ export async function loadEngine(): Promise<EngineServices> {
       },
     },
   };
-  const [engineSurface, { completenessChecks }] = await Promise.all([import('../../src/engine/index.ts'), import('./completeness-checks.ts')]);
+  const { completenessChecks } = await import('./completeness-checks.ts');
   return {
     version: ENGINE_VERSION,
     strategies,

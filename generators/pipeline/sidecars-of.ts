@@ -1,5 +1,5 @@
 import type { Box, CertificatesFile, SystemsFile } from '../../src/atlas/sidecars.ts';
-import type { PolynomialSystem } from '../../src/engine/expr/node.ts';
+import type { PolynomialSystem } from '../../src/engine/index.ts';
 import type { CertifyReport } from './engine-services.ts';
 import { expandEquation, type Polynomial } from './expand-system.ts';
 import { polynomialText } from './polynomial-text.ts';

@@ -1,6 +1,4 @@
-import type { ExprNode, PolynomialSystem } from '../engine/expr/node.ts';
-import type { ParameterProblem } from '../engine/parameter/solve-by-parameter-homotopy.ts';
-import type * as ExprOps from '../engine/expr/build.ts';
+import type { ExprNode, exprBuilders as ExprOps, ParameterProblem, PolynomialSystem } from '../engine/index.ts';
 import type { CountSource } from './source.ts';
 import type { FigureItem } from './figure.ts';
 import type { LadderMembership } from './ladder-membership.ts';

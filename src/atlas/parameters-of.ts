@@ -1,4 +1,4 @@
-import { createRandom } from '../engine/random.ts';
+import { createRandom } from '../engine/index.ts';
 import type { InstanceDefinition, ProblemDefinition } from './definition.ts';
 
 /**

@@ -1,5 +1,4 @@
-import type { PolynomialSystem } from '../engine/expr/node.ts';
-import { degree } from '../engine/expr/degree.ts';
+import { degree, type PolynomialSystem } from '../engine/index.ts';
 import type { ProblemDefinition } from './definition.ts';
 import { polynomialIssues } from './polynomial-check.ts';
 import { systemOf } from './system-of.ts';

@@ -1,5 +1,4 @@
-import * as ops from '../engine/expr/build.ts';
-import type { ExprNode, PolynomialSystem } from '../engine/expr/node.ts';
+import { type ExprNode, exprBuilders as ops, type PolynomialSystem } from '../engine/index.ts';
 import type { ProblemDefinition } from './definition.ts';
 
 /**

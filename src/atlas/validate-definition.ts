@@ -1,5 +1,5 @@
 import type { z } from 'astro/zod';
-import type { PolynomialSystem } from '../engine/expr/node.ts';
+import type { PolynomialSystem } from '../engine/index.ts';
 import type { ProblemDefinition } from './definition.ts';
 import { instanceIssues, nameIssues, textIssues } from './definition-checks.ts';
 import { definitionSchema } from './definition-schema.ts';

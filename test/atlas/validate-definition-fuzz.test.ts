@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { createRandom, type RandomSource } from '../../src/engine/random.ts';
+import { createRandom, type RandomSource } from '../../src/engine/index.ts';
 import { validateDefinition } from '../../src/atlas/validate-definition.ts';
 import { formatIssues } from '../../src/atlas/validation-issue.ts';
 import twoConics from '../generators/pipeline/fixtures/two-conics.ts';

@@ -1,6 +1,6 @@
-import { param } from '../../../src/engine/expr/build.ts';
-import type { ExprNode } from '../../../src/engine/expr/node.ts';
-import { createRandom } from '../../../src/engine/random.ts';
+import { createRandom, exprBuilders, type ExprNode } from '../../../src/engine/index.ts';
+
+const { param } = exprBuilders;
 
 /** Hands out coefficient parameters one by one and records their values. */
 export interface CoefficientSource {

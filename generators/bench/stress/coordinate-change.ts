@@ -1,7 +1,6 @@
-import { constant, dot, mul } from '../../../src/engine/expr/build.ts';
-import type { ExprNode } from '../../../src/engine/expr/node.ts';
-import { createDenseLU } from '../../../src/engine/linalg/dense-lu.ts';
-import { createRandom } from '../../../src/engine/random.ts';
+import { createDenseLU, createRandom, exprBuilders, type ExprNode } from '../../../src/engine/index.ts';
+
+const { constant, dot, mul } = exprBuilders;
 
 /**
  * A change of coordinates applied to a system f: the variant is g(x) = f(φ(x)), built by putting the nodes φ(x) where

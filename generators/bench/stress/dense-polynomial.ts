@@ -1,7 +1,8 @@
-import { add, mul, pow } from '../../../src/engine/expr/build.ts';
-import type { ExprNode } from '../../../src/engine/expr/node.ts';
+import { exprBuilders, type ExprNode } from '../../../src/engine/index.ts';
 import { monomialExponents } from '../../problems/shared/monomials.ts';
 import type { CoefficientSource } from './coefficient-source.ts';
+
+const { add, mul, pow } = exprBuilders;
 
 /**
  * Σ c_α · Π coordinates[j]^α_j over every monomial of total degree ≤ degree in the given coordinate nodes (highest

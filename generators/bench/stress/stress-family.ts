@@ -1,7 +1,8 @@
-import { mul, add } from '../../../src/engine/expr/build.ts';
-import type { ExprNode } from '../../../src/engine/expr/node.ts';
+import { exprBuilders, type ExprNode } from '../../../src/engine/index.ts';
 import type { CoefficientSource } from './coefficient-source.ts';
 import { densePolynomial } from './dense-polynomial.ts';
+
+const { mul, add } = exprBuilders;
 
 /** A family of square systems with random coefficients whose number of isolated nonsingular solutions is known. */
 export interface StressFamily {

@@ -1,8 +1,9 @@
-import { param, unknown } from '../../../src/engine/expr/build.ts';
-import type { PolynomialSystem } from '../../../src/engine/expr/node.ts';
+import { exprBuilders, type PolynomialSystem } from '../../../src/engine/index.ts';
 import { coefficientSource } from './coefficient-source.ts';
 import type { CoordinateChange } from './coordinate-change.ts';
 import type { StressFamily } from './stress-family.ts';
+
+const { param, unknown } = exprBuilders;
 
 /** One system of the stress corpus: a family member at one seed, after one change of coordinates. */
 export interface StressSystem {

@@ -1,6 +1,6 @@
 import type { ComplexInput, ProblemDefinition } from '../../../src/atlas/definition.ts';
 import type { FigureItem } from '../../../src/atlas/figure.ts';
-import type { ExprNode } from '../../../src/engine/expr/node.ts';
+import type { ExprNode, exprBuilders } from '../../../src/engine/index.ts';
 import { fitWindow } from '../shared/fit-window.ts';
 import { genericInstance } from '../shared/generic-instance.ts';
 import { normalizeByLargest } from '../shared/normalize.ts';
@@ -48,7 +48,7 @@ function titleFor(p: number): string {
  * exactly when the conic restricted to the line has a double root (the line is tangent), and identically on
  * double lines, where adj(M) = 0.
  */
-export function tangencyQuadric(ops: typeof import('../../../src/engine/expr/build.ts'), k: Readonly<Record<string, ExprNode>>, u: ExprNode, v: ExprNode, w: ExprNode): ExprNode {
+export function tangencyQuadric(ops: typeof exprBuilders, k: Readonly<Record<string, ExprNode>>, u: ExprNode, v: ExprNode, w: ExprNode): ExprNode {
   const { a, b, c, d, e, f } = k as Record<(typeof coefficients)[number], ExprNode>;
   const minor = (x: ExprNode, y: ExprNode, z: ExprNode, s: number) => ops.sub(ops.mul(s, x, y), ops.pow(z, 2));
   const mixed = (x: ExprNode, y: ExprNode, z: ExprNode, t: ExprNode) => ops.sub(ops.mul(x, y), ops.mul(2, z, t));

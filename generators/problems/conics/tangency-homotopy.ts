@@ -1,6 +1,5 @@
-import type { Homotopy } from '../../../src/engine/homotopy.ts';
-import { createArrowheadSolver } from '../../../src/engine/linalg/arrowhead-solver.ts';
-import { gammaArc } from '../../../src/engine/parameter/gamma-arc.ts';
+import { gammaArc, type Homotopy } from '../../../src/engine/index.ts';
+import { createTangencySolver } from './tangency-pair-blocks.ts';
 import { coefficientGradient, conicTimesPoint, dot3 } from './conic-kernels.ts';
 import { chartCount, parameterCount, tangencyArrowhead, unknownCount, type TangencyShape } from './tangency-layout.ts';
 
@@ -174,6 +173,6 @@ export function createHomotopy(args: TangencyHomotopyArgs): Homotopy {
     n,
     evaluate(x, tRe, tIm, h, jac, ht) { run(x, tRe, tIm, h, jac, ht); },
     evaluateValue(x, tRe, tIm, h) { run(x, tRe, tIm, h, null, null); },
-    createSolver: () => createArrowheadSolver(layout),
+    createSolver: () => createTangencySolver(layout),
   };
 }

@@ -1,4 +1,4 @@
-import type { ArrowheadLayout } from '../../../src/engine/linalg/arrowhead-solver.ts';
+import type { ArrowheadLayout } from '../../../src/engine/index.ts';
 
 /**
  * Index layout of the tangency-point formulation of "conics through p points tangent to k = 5 − p conics".

@@ -1,5 +1,4 @@
-import type { RandomSource } from '../../../src/engine/random.ts';
-import { createDenseLU } from '../../../src/engine/linalg/dense-lu.ts';
+import { createDenseLU, type RandomSource } from '../../../src/engine/index.ts';
 import { coefficientGradient, conicTimesPoint, cross3, dot3Im, dot3Re } from './conic-kernels.ts';
 import { chartCount, checkShape, parameterCount, pointOf, unknownCount, type TangencyShape } from './tangency-layout.ts';
 

@@ -1,5 +1,4 @@
-import * as ops from '../../../src/engine/expr/build.ts';
-import type { ExprNode, PolynomialSystem } from '../../../src/engine/expr/node.ts';
+import { type ExprNode, exprBuilders as ops, type PolynomialSystem } from '../../../src/engine/index.ts';
 import { CONIC_LETTERS, parameterNames, tangencyUnknownNames } from './conic-names.ts';
 import { conicAt, conicMatrix, matVec } from './conic-expr.ts';
 import { chartCount, type TangencyShape } from './tangency-layout.ts';

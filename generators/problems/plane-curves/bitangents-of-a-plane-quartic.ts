@@ -1,6 +1,6 @@
 import { defineProblem, type ComplexInput } from '../../../src/atlas/definition.ts';
 import type { FigureItem } from '../../../src/atlas/figure.ts';
-import type { ExprNode } from '../../../src/engine/expr/node.ts';
+import type { ExprNode } from '../../../src/engine/index.ts';
 import { coefficientNames, monomialExponents } from '../shared/monomials.ts';
 import { substitute } from '../shared/univariate.ts';
 import type { PlaneWindow } from '../shared/contour.ts';

@@ -1,5 +1,4 @@
-import type { ExprNode } from '../../../src/engine/expr/node.ts';
-import type * as ExprOps from '../../../src/engine/expr/build.ts';
+import type { ExprNode, exprBuilders as ExprOps } from '../../../src/engine/index.ts';
 
 type Ops = typeof ExprOps;
 

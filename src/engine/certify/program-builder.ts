@@ -1,4 +1,4 @@
-import type { Instruction, SlotRef } from './straight-line.ts';
+import type { Instruction, SlotRef } from './slot-instruction.ts';
 
 /**
  * Builds straight-line code with structural hashing: every sum, product and square is emitted once per distinct

@@ -1,5 +1,5 @@
 import type { ProgramBuilder } from './program-builder.ts';
-import type { Instruction, SlotRef } from './straight-line.ts';
+import type { Instruction, SlotRef } from './slot-instruction.ts';
 
 /**
  * Reverse-mode differentiation of forward straight-line code, one backward sweep per equation: adjoints are

@@ -1,5 +1,5 @@
 import type { PointCertificate } from './certify-point.ts';
-import type { CertificationReport, CertifiedSolution } from './certify-solutions.ts';
+import type { CertificationReport, CertifiedSolution } from './certification-report.ts';
 import { overlapGroups } from './overlap-groups.ts';
 
 /**

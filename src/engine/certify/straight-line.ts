@@ -1,16 +1,9 @@
 import type { ExprNode, PolynomialSystem } from '../expr/node.ts';
 import { createProgramBuilder } from './program-builder.ts';
 import { differentiate } from './reverse-mode.ts';
+import type { Instruction, SlotRef } from './slot-instruction.ts';
 
-/** A signed reference to a slot; null stands for the exact value 0. */
-export type SlotRef = { readonly slot: number; readonly neg: boolean } | null;
-
-/** One instruction of the straight-line program; every slot is written once (SSA). */
-export type Instruction =
-  | { readonly op: 'load'; readonly out: number; readonly index: number }
-  | { readonly op: 'sum'; readonly out: number; readonly terms: readonly number[]; readonly negs: readonly boolean[] }
-  | { readonly op: 'mul'; readonly out: number; readonly a: number; readonly b: number }
-  | { readonly op: 'sqr'; readonly out: number; readonly a: number };
+export type { Instruction, SlotRef } from './slot-instruction.ts';
 
 /**
  * A system lowered to straight-line code: forward instructions give the equation values, backward ones

@@ -1,5 +1,4 @@
 import type { LinearSolver } from '../homotopy.ts';
-import { createPairBlockSolver } from './arrowhead-pair-blocks.ts';
 import { backward, eliminate, forward } from './pivoted-elimination.ts';
 
 /**
@@ -33,17 +32,12 @@ export function checkArrowheadLayout(layout: ArrowheadLayout): void {
 /**
  * A LinearSolver for arrowhead Jacobians (packed complex, row-major n×n): eliminates each private block by LU with
  * partial pivoting, then solves the dense Schur system in the shared unknowns by LU with partial pivoting.
- * Entries outside the declared pattern are ignored (they must be zero). Allocates only at creation.
+ * Entries outside the declared pattern are ignored (they must be zero). Allocates only at creation. Any block sizes; a
+ * family may supply a specialised solver for its own block shape (the conic family's tangency-pair-blocks.ts).
  * factor() returns ‖A‖∞ (within √2) / (smallest pivot modulus), a cheap condition estimate (a lower bound on κ∞ in exact
  * arithmetic up to the growth factor); Infinity on a zero pivot.
  */
 export function createArrowheadSolver(layout: ArrowheadLayout): LinearSolver {
-  checkArrowheadLayout(layout);
-  return createPairBlockSolver(layout) ?? createGeneralArrowheadSolver(layout);
-}
-
-/** The arrowhead solver for any block sizes (createArrowheadSolver picks it unless every block is 3×2); same contract. */
-export function createGeneralArrowheadSolver(layout: ArrowheadLayout): LinearSolver {
   checkArrowheadLayout(layout);
   const { n, shared, blocks, border } = layout;
   const s = shared.length, nb = blocks.length;

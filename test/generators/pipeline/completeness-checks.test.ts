@@ -1,9 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import * as engine from '../../../src/engine/index.ts';
-import { add, mul, param, sub, unknown } from '../../../src/engine/expr/build.ts';
+import { createRandom, exprBuilders } from '../../../src/engine/index.ts';
 import { completenessChecks, RECOVERY_LIMIT, TRACE_LIMIT } from '../../../generators/pipeline/completeness-checks.ts';
 import { completeFlags } from '../../../generators/pipeline/assemble-instance.ts';
-import { createRandom } from '../../../src/engine/random.ts';
+
+const { add, mul, param, sub, unknown } = exprBuilders;
 
 // Two general conics meet in 2·2 = 4 points (Bézout's theorem; Fulton, Algebraic Curves, 1969): random complex
 // coefficients as parameters, so the family is the space of conic pairs.

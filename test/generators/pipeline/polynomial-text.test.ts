@@ -1,8 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { expandEquation } from '../../../generators/pipeline/expand-system.ts';
 import { plainDecimal, polynomialText } from '../../../generators/pipeline/polynomial-text.ts';
-import * as ops from '../../../src/engine/expr/build.ts';
-import type { ExprNode } from '../../../src/engine/expr/node.ts';
+import { type ExprNode, exprBuilders as ops } from '../../../src/engine/index.ts';
 
 const x = { kind: 'unknown', index: 0, name: 'x' } as const satisfies ExprNode;
 const y = { kind: 'unknown', index: 1, name: 'y' } as const satisfies ExprNode;

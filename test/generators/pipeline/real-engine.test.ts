@@ -1,12 +1,8 @@
 import { afterAll, describe, expect, it } from 'vitest';
 import { loadEngine } from '../../../generators/pipeline/real-engine.ts';
 import type { ProblemDefinition } from '../../../src/atlas/definition.ts';
-import * as ops from '../../../src/engine/expr/build.ts';
-import { compileSystem } from '../../../src/engine/compile/compile-system.ts';
-import { COMPILED_LEG_MODULE } from '../../../src/engine/parameter/compiled-leg-module.ts';
-import type { ParameterProblem } from '../../../src/engine/parameter/solve-by-parameter-homotopy.ts';
+import { COMPILED_LEG_MODULE, compileSystem, ENGINE_VERSION, exprBuilders as ops, type ParameterProblem } from '../../../src/engine/index.ts';
 import { problems } from '../../../generators/problems/index.ts';
-import { ENGINE_VERSION } from '../../../src/engine/version.ts';
 
 describe('the production engine wiring', () => {
   it('carries the engine version and a strategy for every solver kind the registry uses', async () => {

@@ -6,8 +6,7 @@ import { systemOf } from '../../../src/atlas/system-of.ts';
 import { parametersOf } from '../../../src/atlas/parameters-of.ts';
 import { countSourceSchema } from '../../../src/atlas/source.ts';
 import { figureItemSchema } from '../../../src/atlas/figure.ts';
-import { degree } from '../../../src/engine/expr/degree.ts';
-import { multihomogeneousBound } from '../../../src/engine/solve/solve-system.ts';
+import { degree, multihomogeneousBound } from '../../../src/engine/index.ts';
 
 // The Bézout bound of each formulation, product of the equation degrees read off the graph. These are our own
 // derivations ("[derived]" in REFERENCES.md), recomputed by hand beside each row.

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { coefficientSource } from '../../../../generators/bench/stress/coefficient-source.ts';
-import { createRandom } from '../../../../src/engine/random.ts';
+import { createRandom } from '../../../../src/engine/index.ts';
 
 describe('coefficients as seeded Gaussian complex parameters', () => {
   it('hands out parameters c0, c1, … whose values are the seed stream of createRandom, in order', () => {

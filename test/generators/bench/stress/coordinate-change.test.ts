@@ -2,8 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { linearChange, scaledUnknowns, unchanged } from '../../../../generators/bench/stress/coordinate-change.ts';
 import { stressSystem } from '../../../../generators/bench/stress/stress-system.ts';
 import { denseFamily, hyperplaneExcessFamily } from '../../../../generators/bench/stress/stress-family.ts';
-import { createRandom } from '../../../../src/engine/random.ts';
-import { multiplyComplex } from '../../../../src/engine/certify/complex-inverse.ts';
+import { createRandom, multiplyComplex } from '../../../../src/engine/index.ts';
 import { evaluate, type C } from '../../problems/shared/evaluate.ts';
 
 const pairs = (v: Float64Array): C[] => Array.from({ length: v.length / 2 }, (_, k) => [v[2 * k]!, v[2 * k + 1]!]);

@@ -1,9 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import { coefficientSource } from '../../../../generators/bench/stress/coefficient-source.ts';
 import { densePolynomial } from '../../../../generators/bench/stress/dense-polynomial.ts';
-import { unknown } from '../../../../src/engine/expr/build.ts';
-import { degree } from '../../../../src/engine/expr/degree.ts';
+import { degree, exprBuilders } from '../../../../src/engine/index.ts';
 import { evaluate, type C } from '../../problems/shared/evaluate.ts';
+
+const { unknown } = exprBuilders;
 
 const vars = (n: number) => Array.from({ length: n }, (_, j) => unknown(`x${j + 1}`, j));
 

@@ -2,8 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { curveExcessFamily, denseFamily, hyperplaneExcessFamily } from '../../../../generators/bench/stress/stress-family.ts';
 import { unchanged } from '../../../../generators/bench/stress/coordinate-change.ts';
 import { stressSystem } from '../../../../generators/bench/stress/stress-system.ts';
-import { degree } from '../../../../src/engine/expr/degree.ts';
-import { bezoutBound } from '../../../../src/engine/start/bounds.ts';
+import { bezoutBound, degree } from '../../../../src/engine/index.ts';
 import { evaluate, type C } from '../../problems/shared/evaluate.ts';
 
 describe.each([

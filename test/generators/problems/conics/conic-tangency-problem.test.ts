@@ -3,11 +3,7 @@ import { validateDefinition } from '../../../../src/atlas/validate-definition.ts
 import { systemOf } from '../../../../src/atlas/system-of.ts';
 import { parametersOf } from '../../../../src/atlas/parameters-of.ts';
 import { figureItemSchema } from '../../../../src/atlas/figure.ts';
-import { bezoutBound } from '../../../../src/engine/start/bounds.ts';
-import { compileSystem } from '../../../../src/engine/compile/compile-system.ts';
-import { createRandom } from '../../../../src/engine/random.ts';
-import { randomParameterPoint } from '../../../../src/engine/parameter/route.ts';
-import { solveByParameterHomotopy } from '../../../../src/engine/parameter/solve-by-parameter-homotopy.ts';
+import { bezoutBound, compileSystem, createRandom, randomParameterPoint, solveByParameterHomotopy } from '../../../../src/engine/index.ts';
 import { conicLadderSlug, CONIC_LADDER } from '../../../../generators/problems/conics/conic-tangency-problem.ts';
 import { ellipseCoefficients, tangencyPoint } from '../../../../generators/problems/conics/conic-geometry.ts';
 import five from '../../../../generators/problems/conics/conics-tangent-to-5-conics.ts';

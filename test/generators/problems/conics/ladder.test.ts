@@ -1,9 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { createRandom } from '../../../../src/engine/random.ts';
-import { discoverByMonodromy } from '../../../../src/engine/monodromy/discover.ts';
-import { createInProcessLegTracker } from '../../../../src/engine/parameter/in-process-tracker.ts';
-import { randomParameterPoint } from '../../../../src/engine/parameter/route.ts';
-import { solveByParameterHomotopy } from '../../../../src/engine/parameter/solve-by-parameter-homotopy.ts';
+import { createInProcessLegTracker, createRandom, discoverByMonodromy, randomParameterPoint, solveByParameterHomotopy } from '../../../../src/engine/index.ts';
 import { systemOf } from '../../../../src/atlas/system-of.ts';
 import { createHomotopy } from '../../../../generators/problems/conics/tangency-homotopy.ts';
 import { randomChart, tangencySeed } from '../../../../generators/problems/conics/tangency-seed.ts';

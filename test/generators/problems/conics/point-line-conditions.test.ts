@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { pointLineProblem, characteristicNumbers, tangencyQuadric } from '../../../../generators/problems/conics/point-line-conditions.ts';
-import * as ops from '../../../../src/engine/expr/build.ts';
+import { exprBuilders as ops } from '../../../../src/engine/index.ts';
 import { systemOf } from '../../../../src/atlas/system-of.ts';
 import { evaluate, largestResidual, paramsFrom, real, type C } from '../shared/evaluate.ts';
 import { drawnRealSolutions, demoInstance, randomInstance, seeds, solveInstance, splitSeeds, worstResidual } from '../shared/solve.ts';

@@ -1,9 +1,8 @@
 import { describe, expect, it } from 'vitest';
-import { createRandom } from '../../../../src/engine/random.ts';
+import { createRandom, matVec } from '../../../../src/engine/index.ts';
 import { createHomotopy } from '../../../../generators/problems/conics/tangency-homotopy.ts';
 import { randomChart, tangencySeed } from '../../../../generators/problems/conics/tangency-seed.ts';
 import { parameterCount, unknownCount } from '../../../../generators/problems/conics/tangency-layout.ts';
-import { matVec } from '../../../../src/engine/complex/packed.ts';
 
 const shapes = [0, 1, 2, 3, 4, 5].map((points) => ({ points, conics: 5 - points }));
 

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { createRandom } from '../../../../src/engine/random.ts';
+import { createRandom } from '../../../../src/engine/index.ts';
 import { createHomotopy } from '../../../../generators/problems/conics/tangency-homotopy.ts';
 import { randomChart, tangencySeed } from '../../../../generators/problems/conics/tangency-seed.ts';
 import { convertChart } from '../../../../generators/problems/conics/tangency-rechart.ts';

@@ -1,13 +1,9 @@
 import { describe, expect, it } from 'vitest';
-import { createRandom } from '../../../../src/engine/random.ts';
-import { compileSystem } from '../../../../src/engine/compile/compile-system.ts';
-import { gammaArc } from '../../../../src/engine/parameter/gamma-arc.ts';
-import { degree } from '../../../../src/engine/expr/degree.ts';
+import { compileSystem, createRandom, degree, gammaArc, matVec } from '../../../../src/engine/index.ts';
 import { createHomotopy } from '../../../../generators/problems/conics/tangency-homotopy.ts';
 import { tangencySystem } from '../../../../generators/problems/conics/tangency-system.ts';
 import { randomChart, tangencySeed } from '../../../../generators/problems/conics/tangency-seed.ts';
 import { parameterCount, unknownCount } from '../../../../generators/problems/conics/tangency-layout.ts';
-import { matVec } from '../../../../src/engine/complex/packed.ts';
 
 describe.each([0, 2, 4].map((points) => ({ points, conics: 5 - points })))('tangency system through $points points, $conics conics', (shape) => {
   const random = createRandom(5 + shape.points);

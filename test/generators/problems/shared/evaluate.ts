@@ -1,4 +1,4 @@
-import type { ExprNode } from '../../../../src/engine/expr/node.ts';
+import type { ExprNode } from '../../../../src/engine/index.ts';
 
 /** A complex number as [re, im]. */
 export type C = [number, number];

@@ -1,7 +1,7 @@
 import type { InstanceDefinition, ProblemDefinition } from '../../../../src/atlas/definition.ts';
 import { systemOf } from '../../../../src/atlas/system-of.ts';
 import { parametersOf } from '../../../../src/atlas/parameters-of.ts';
-import { solveSystem, type SolveReport } from '../../../../src/engine/solve/solve-system.ts';
+import { type SolveReport, solveSystem } from '../../../../src/engine/index.ts';
 import { coordinatesOf, isRealValues } from '../../../../generators/pipeline/coordinates-of.ts';
 import { figureItemSchema, type FigureItem } from '../../../../src/atlas/figure.ts';
 

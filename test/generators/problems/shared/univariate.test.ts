@@ -1,6 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import * as ops from '../../../../src/engine/expr/build.ts';
-import { degree } from '../../../../src/engine/expr/degree.ts';
+import { degree, exprBuilders as ops } from '../../../../src/engine/index.ts';
 import { multiply, plus, substitute } from '../../../../generators/problems/shared/univariate.ts';
 import { evaluate, real } from './evaluate.ts';
 

@@ -1,14 +1,12 @@
-import type { LinearSolver } from '../homotopy.ts';
-import type { ArrowheadLayout } from './arrowhead-solver.ts';
-import { backward, eliminate, forward } from './pivoted-elimination.ts';
+import { checkArrowheadLayout, createArrowheadSolver, pivotedBackward as backward, pivotedEliminate as eliminate, pivotedForward as forward, type ArrowheadLayout, type LinearSolver } from '../../../src/engine/index.ts';
 
 // Per-block factor record (reals): multipliers l1, l2 (column 0), l3 (column 1), pivots u00, u11, the entry u01,
 // then the two upper rows S0, S1 over the shared unknowns.
 const L1 = 0, L2 = 2, L3 = 4, U00 = 6, U01 = 8, U11 = 10, S0 = 12;
 
 /**
- * The arrowhead solver specialised to blocks of 3 equations in 2 private unknowns (the tangency points of the conic
- * problems): the same partial-pivoting elimination, operation for operation, as the generic one (results agree to
+ * The engine's arrowhead solver specialised to blocks of 3 equations in 2 private unknowns (the tangency points of the
+ * conic problems): the same partial-pivoting elimination, operation for operation, as the generic one (results agree to
  * the last bit), written out without index tables or generic loops over the private columns. Null for any other
  * layout. Allocates only at creation; factor() returns the same ‖A‖∞ / (smallest pivot) estimate as the generic one;
  * factorOnly() skips that estimate (false when a pivot is zero or not finite).
@@ -142,4 +140,10 @@ export function createPairBlockSolver(layout: ArrowheadLayout): LinearSolver | n
       for (let j = 0; j < s; j++) { out[sc[j]!] = xs[2 * j]!; out[sc[j]! + 1] = xs[2 * j + 1]!; }
     },
   };
+}
+
+/** The tangency formulation's linear solver: the 3×2-block solver when every block is 3×2, else the engine's general one (layout checked first). */
+export function createTangencySolver(layout: ArrowheadLayout): LinearSolver {
+  checkArrowheadLayout(layout);
+  return createPairBlockSolver(layout) ?? createArrowheadSolver(layout);
 }
