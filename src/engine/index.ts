@@ -38,7 +38,7 @@ export { createArrowheadSolver, checkArrowheadLayout, type ArrowheadLayout } fro
 export { eliminate as pivotedEliminate, forward as pivotedForward, backward as pivotedBackward } from './linalg/pivoted-elimination.ts';
 export * as exprBuilders from './expr/build.ts';
 export { degree } from './expr/degree.ts';
-export { matVec } from './complex/packed.ts';
+export { matVec, dotu, dotc } from './complex/packed.ts';
 export { gammaArc } from './parameter/gamma-arc.ts';
 export { randomParameterPoint } from './parameter/route.ts';
 export { certifySolutions, prepareCertifier, type CertificationReport, type Certifier, type CertifyOptions } from './certify/certify-solutions.ts';

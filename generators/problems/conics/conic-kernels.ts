@@ -25,16 +25,6 @@ export function dot3(a: Float64Array, ao: number, b: Float64Array, bo: number, o
   out[oo + 1] = f * (a0r * b0i + a0i * b0r + a1r * b1i + a1i * b1r + a2r * b2i + a2i * b2r);
 }
 
-/** Real part of the bilinear dot product of two packed complex 3-vectors. */
-export function dot3Re(a: Float64Array, ao: number, b: Float64Array, bo: number): number {
-  return a[ao]! * b[bo]! - a[ao + 1]! * b[bo + 1]! + a[ao + 2]! * b[bo + 2]! - a[ao + 3]! * b[bo + 3]! + a[ao + 4]! * b[bo + 4]! - a[ao + 5]! * b[bo + 5]!;
-}
-
-/** Imaginary part of the bilinear dot product of two packed complex 3-vectors. */
-export function dot3Im(a: Float64Array, ao: number, b: Float64Array, bo: number): number {
-  return a[ao]! * b[bo + 1]! + a[ao + 1]! * b[bo]! + a[ao + 2]! * b[bo + 3]! + a[ao + 3]! * b[bo + 2]! + a[ao + 4]! * b[bo + 5]! + a[ao + 5]! * b[bo + 4]!;
-}
-
 /** out[oo..] = a × b (cross product of packed complex 3-vectors). */
 export function cross3(a: Float64Array, ao: number, b: Float64Array, bo: number, out: Float64Array, oo: number): void {
   const a0r = a[ao]!, a0i = a[ao + 1]!, a1r = a[ao + 2]!, a1i = a[ao + 3]!, a2r = a[ao + 4]!, a2i = a[ao + 5]!;

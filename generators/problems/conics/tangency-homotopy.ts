@@ -1,7 +1,7 @@
 import { gammaArc, type Homotopy } from '../../../src/engine/index.ts';
 import { createTangencySolver } from './tangency-pair-blocks.ts';
 import { coefficientGradient, conicTimesPoint, dot3 } from './conic-kernels.ts';
-import { chartCount, parameterCount, tangencyArrowhead, unknownCount, type TangencyShape } from './tangency-layout.ts';
+import { chartCount, chartIndex, contactIndex, givenConicIndex, parameterCount, tangencyArrowhead, tangencyRow, unknownCount, type TangencyShape } from './tangency-layout.ts';
 
 /** Arguments of the worker-loadable homotopy: the shape, chart constants and one parameter leg (all packed complex). */
 export interface TangencyHomotopyArgs extends TangencyShape {
@@ -83,7 +83,7 @@ export function createHomotopy(args: TangencyHomotopyArgs): Homotopy {
     const uar = x[0]!, uai = x[1]!, ubr = 0.5 * x[2]!, ubi = 0.5 * x[3]!, ucr = x[4]!, uci = x[5]!;
     const udr = 0.5 * x[6]!, udi = 0.5 * x[7]!, uer = 0.5 * x[8]!, uei = 0.5 * x[9]!, ufr = x[10]!, ufi = x[11]!;
     for (let i = 0; i < k; i++) {
-      const co = 2 * (6 + 12 * i), po = 2 * (2 * pts + 6 * i), so = 2 * (6 + 2 * i), cs = so, row = 1 + pts + 3 * i;
+      const co = 2 * chartIndex(i), po = 2 * givenConicIndex(shape, i), so = 2 * contactIndex(i), cs = so, row = tangencyRow(shape, i);
       const r1 = 2 * row, r2 = 2 * (row + 1), r3 = 2 * (row + 2);
       const sr = x[so]!, si = x[so + 1]!;
       const rr = x[so + 2]!, ri = x[so + 2 + 1]!;

@@ -15,7 +15,7 @@ export interface TangencyShape {
 
 /** Number of complex unknowns (= equations): 6 + 2k. */
 export function unknownCount(shape: TangencyShape): number {
-  return 6 + 2 * shape.conics;
+  return contactIndex(shape.conics);
 }
 
 /** Number of complex parameters: 2p + 6k. */
@@ -25,7 +25,27 @@ export function parameterCount(shape: TangencyShape): number {
 
 /** Number of complex chart constants: 6 + 12k. */
 export function chartCount(shape: TangencyShape): number {
-  return 6 + 12 * shape.conics;
+  return chartIndex(shape.conics);
+}
+
+/** Complex index of the chart constants of given conic i (origin o, directions v, w, normal m: 3 each). */
+export function chartIndex(i: number): number {
+  return 6 + 12 * i;
+}
+
+/** Complex index of the unknown sᵢ of given conic i's tangency point (rᵢ follows it). */
+export function contactIndex(i: number): number {
+  return 6 + 2 * i;
+}
+
+/** Complex index of the first coefficient of given conic i among the parameters (after the p points). */
+export function givenConicIndex(shape: TangencyShape, i: number): number {
+  return 2 * shape.points + 6 * i;
+}
+
+/** The first of the three equation rows of given conic i (after the chart row and the p point rows). */
+export function tangencyRow(shape: TangencyShape, i: number): number {
+  return 1 + shape.points + 3 * i;
 }
 
 /** Checks p + k = 5 with non-negative integers; throws naming the fault. */
@@ -44,16 +64,16 @@ export function tangencyArrowhead(shape: TangencyShape): ArrowheadLayout {
     n: unknownCount(shape),
     shared: [0, 1, 2, 3, 4, 5],
     border: Array.from({ length: 1 + p }, (_, i) => i),
-    blocks: Array.from({ length: shape.conics }, (_, i) => ({
-      unknowns: [6 + 2 * i, 7 + 2 * i],
-      equations: [1 + p + 3 * i, 2 + p + 3 * i, 3 + p + 3 * i],
-    })),
+    blocks: Array.from({ length: shape.conics }, (_, i) => {
+      const row = tangencyRow(shape, i);
+      return { unknowns: [contactIndex(i), contactIndex(i) + 1], equations: [row, row + 1, row + 2] };
+    }),
   };
 }
 
 /** The tangency point of block i, P = o + s·v + r·w, written to out[oo..oo+5]. */
 export function pointOf(chart: Float64Array, i: number, x: Float64Array, out: Float64Array, oo: number): void {
-  const co = 2 * (6 + 12 * i), so = 2 * (6 + 2 * i);
+  const co = 2 * chartIndex(i), so = 2 * contactIndex(i);
   const sr = x[so]!, si = x[so + 1]!, rr = x[so + 2]!, ri = x[so + 3]!;
   for (let c = 0; c < 6; c += 2) {
     const vr = chart[co + 6 + c]!, vi = chart[co + 7 + c]!, wr = chart[co + 12 + c]!, wi = chart[co + 13 + c]!;

@@ -1,15 +1,6 @@
+import { dotu } from '../../../src/engine/index.ts';
 import { cross3 } from './conic-kernels.ts';
-import { pointOf, unknownCount, type TangencyShape } from './tangency-layout.ts';
-
-/** (a·b) for packed complex m-vectors, bilinear, written to out[0..1]. */
-function dotC(a: Float64Array, ao: number, b: Float64Array, bo: number, m: number, out: Float64Array): void {
-  let re = 0, im = 0;
-  for (let j = 0; j < m; j++) {
-    const ar = a[ao + 2 * j]!, ai = a[ao + 2 * j + 1]!, br = b[bo + 2 * j]!, bi = b[bo + 2 * j + 1]!;
-    re += ar * br - ai * bi; im += ar * bi + ai * br;
-  }
-  out[0] = re; out[1] = im;
-}
+import { chartIndex, contactIndex, pointOf, unknownCount, type TangencyShape } from './tangency-layout.ts';
 
 /** z / w for complex numbers given as pairs. */
 function divide(zr: number, zi: number, wr: number, wi: number): [number, number] {
@@ -23,13 +14,13 @@ function divide(zr: number, zi: number, wr: number, wi: number): [number, number
  */
 export function convertChart(shape: TangencyShape, x: Float64Array, from: Float64Array, to: Float64Array): Float64Array {
   const out = new Float64Array(2 * unknownCount(shape)), t = new Float64Array(2);
-  dotC(to, 0, x, 0, 6, t);
+  dotu(t, to, x, 6);
   for (let k = 0; k < 6; k++) [out[2 * k], out[2 * k + 1]] = divide(x[2 * k]!, x[2 * k + 1]!, t[0]!, t[1]!);
   const P = new Float64Array(6), D = new Float64Array(6), vw = new Float64Array(6), num = new Float64Array(6), c = new Float64Array(6);
   for (let i = 0; i < shape.conics; i++) {
-    const co = 2 * (6 + 12 * i);
+    const co = 2 * chartIndex(i), so = 2 * contactIndex(i);
     pointOf(from, i, x, P, 0);
-    dotC(to, co + 18, P, 0, 3, t);
+    dotu(t, to, P, 3, co + 18);
     for (let j = 0; j < 3; j++) {
       const [pr, pi] = divide(P[2 * j]!, P[2 * j + 1]!, t[0]!, t[1]!);
       D[2 * j] = pr - to[co + 2 * j]!; D[2 * j + 1] = pi - to[co + 2 * j + 1]!;
@@ -37,13 +28,13 @@ export function convertChart(shape: TangencyShape, x: Float64Array, from: Float6
     cross3(to, co + 6, to, co + 12, vw, 0);
     for (let j = 0; j < 6; j++) c[j] = j % 2 === 0 ? vw[j]! : -vw[j]!;
     const den = new Float64Array(2);
-    dotC(vw, 0, c, 0, 3, den);
+    dotu(den, vw, c, 3);
     cross3(D, 0, to, co + 12, num, 0);
-    dotC(num, 0, c, 0, 3, t);
-    [out[2 * (6 + 2 * i)], out[2 * (6 + 2 * i) + 1]] = divide(t[0]!, t[1]!, den[0]!, den[1]!);
+    dotu(t, num, c, 3);
+    [out[so], out[so + 1]] = divide(t[0]!, t[1]!, den[0]!, den[1]!);
     cross3(to, co + 6, D, 0, num, 0);
-    dotC(num, 0, c, 0, 3, t);
-    [out[2 * (7 + 2 * i)], out[2 * (7 + 2 * i) + 1]] = divide(t[0]!, t[1]!, den[0]!, den[1]!);
+    dotu(t, num, c, 3);
+    [out[so + 2], out[so + 3]] = divide(t[0]!, t[1]!, den[0]!, den[1]!);
   }
   return out;
 }

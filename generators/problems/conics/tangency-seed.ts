@@ -1,6 +1,6 @@
-import { createDenseLU, type RandomSource } from '../../../src/engine/index.ts';
-import { coefficientGradient, conicTimesPoint, cross3, dot3Im, dot3Re } from './conic-kernels.ts';
-import { chartCount, checkShape, parameterCount, pointOf, unknownCount, type TangencyShape } from './tangency-layout.ts';
+import { createDenseLU, dotu, type RandomSource } from '../../../src/engine/index.ts';
+import { coefficientGradient, conicTimesPoint, cross3, dot3 } from './conic-kernels.ts';
+import { chartCount, chartIndex, checkShape, contactIndex, givenConicIndex, parameterCount, pointOf, unknownCount, type TangencyShape } from './tangency-layout.ts';
 
 /** Solves the dense complex n×n system A·x = b (packed) by LU with partial pivoting; throws when singular. */
 function solveDense(n: number, A: Float64Array, b: Float64Array): Float64Array {
@@ -19,14 +19,15 @@ export function randomChart(shape: TangencyShape, random: RandomSource): Float64
   checkShape(shape);
   const chart = new Float64Array(2 * chartCount(shape));
   for (let j = 0; j < 6; j++) random.gaussianComplex(chart, 2 * j);
-  const r = new Float64Array(18);
+  const r = new Float64Array(18), md = new Float64Array(2);
   for (let i = 0; i < shape.conics; i++) {
-    const co = 2 * (6 + 12 * i);
+    const co = 2 * chartIndex(i);
     for (let j = 0; j < 9; j++) random.gaussianComplex(r, 2 * j);
     for (let j = 0; j < 3; j++) random.gaussianComplex(chart, co + 18 + 2 * j);
     cross3(chart, co + 18, r, 0, chart, co + 6);
     cross3(chart, co + 18, r, 6, chart, co + 12);
-    const dr = dot3Re(chart, co + 18, r, 12), di = dot3Im(chart, co + 18, r, 12), d = dr * dr + di * di;
+    dot3(chart, co + 18, r, 12, md, 0);
+    const dr = md[0]!, di = md[1]!, d = dr * dr + di * di;
     for (let j = 0; j < 3; j++) {
       const xr = r[12 + 2 * j]!, xi = r[13 + 2 * j]!;
       chart[co + 2 * j] = (xr * dr + xi * di) / d;
@@ -51,8 +52,8 @@ export function tangencySeed(shape: TangencyShape, chart: Float64Array, random: 
     pts.set([parameters[4 * j]!, parameters[4 * j + 1]!, parameters[4 * j + 2]!, parameters[4 * j + 3]!, 1, 0], 6 * j);
   }
   for (let i = 0; i < shape.conics; i++) {
-    random.gaussianComplex(x, 2 * (6 + 2 * i));
-    random.gaussianComplex(x, 2 * (7 + 2 * i));
+    random.gaussianComplex(x, 2 * contactIndex(i));
+    random.gaussianComplex(x, 2 * (contactIndex(i) + 1));
     pointOf(chart, i, x, pts, 6 * (shape.points + i));
   }
   // u: the five point conditions and the chart row.
@@ -67,7 +68,7 @@ export function tangencySeed(shape: TangencyShape, chart: Float64Array, random: 
   // Each given conic: random R minus its bilinear projection onto the two condition rows.
   const UP = new Float64Array(6), hv = new Float64Array(6), G = new Float64Array(24), R = new Float64Array(12);
   for (let i = 0; i < shape.conics; i++) {
-    const po = 6 * (shape.points + i), co = 2 * (6 + 12 * i);
+    const po = 6 * (shape.points + i), co = 2 * chartIndex(i);
     conicTimesPoint(x, 0, pts, po, UP, 0);
     cross3(UP, 0, chart, co + 18, hv, 0);
     coefficientGradient(pts, po, pts, po, G, 0);
@@ -75,11 +76,11 @@ export function tangencySeed(shape: TangencyShape, chart: Float64Array, random: 
     for (let j = 0; j < 6; j++) random.gaussianComplex(R, 2 * j);
     const gram = new Float64Array(8), gr = new Float64Array(4);
     for (let a = 0; a < 2; a++) {
-      gr[2 * a] = dotN(G, 12 * a, R, 0, 6, 0); gr[2 * a + 1] = dotN(G, 12 * a, R, 0, 6, 1);
-      for (let b = 0; b < 2; b++) { gram[2 * (2 * a + b)] = dotN(G, 12 * a, G, 12 * b, 6, 0); gram[2 * (2 * a + b) + 1] = dotN(G, 12 * a, G, 12 * b, 6, 1); }
+      dotu(gr, G, R, 6, 12 * a, 0, 2 * a);
+      for (let b = 0; b < 2; b++) dotu(gram, G, G, 6, 12 * a, 12 * b, 2 * (2 * a + b));
     }
     const coef = solveDense(2, gram, gr);
-    const out = 2 * (2 * shape.points + 6 * i);
+    const out = 2 * givenConicIndex(shape, i);
     for (let j = 0; j < 6; j++) {
       let re = R[2 * j]!, im = R[2 * j + 1]!;
       for (let a = 0; a < 2; a++) {
@@ -92,14 +93,4 @@ export function tangencySeed(shape: TangencyShape, chart: Float64Array, random: 
     }
   }
   return { parameters, solution: x };
-}
-
-/** Real (part 0) or imaginary (part 1) part of the bilinear dot product of two packed complex m-vectors. */
-function dotN(a: Float64Array, ao: number, b: Float64Array, bo: number, m: number, part: 0 | 1): number {
-  let s = 0;
-  for (let j = 0; j < m; j++) {
-    const ar = a[ao + 2 * j]!, ai = a[ao + 2 * j + 1]!, br = b[bo + 2 * j]!, bi = b[bo + 2 * j + 1]!;
-    s += part === 0 ? ar * br - ai * bi : ar * bi + ai * br;
-  }
-  return s;
 }

@@ -1,7 +1,7 @@
 import { type ExprNode, exprBuilders as ops, type PolynomialSystem } from '../../../src/engine/index.ts';
 import { CONIC_LETTERS, parameterNames, tangencyUnknownNames } from './conic-names.ts';
 import { conicAt, conicMatrix, matVec } from './conic-expr.ts';
-import { chartCount, type TangencyShape } from './tangency-layout.ts';
+import { chartCount, chartIndex, contactIndex, type TangencyShape } from './tangency-layout.ts';
 
 /**
  * The tangency-point formulation as an expression graph (for the compiler and for certification), with the chart
@@ -19,7 +19,7 @@ export function tangencySystem(shape: TangencyShape, chart: Float64Array): Polyn
   const equations: ExprNode[] = [ops.sub(ops.dot([0, 1, 2, 3, 4, 5].map(c), u), 1)];
   for (let j = 1; j <= shape.points; j++) equations.push(conicAt(ops, u, [par(`x${j}`), par(`y${j}`), ops.constant(1)]));
   for (let i = 0; i < shape.conics; i++) {
-    const base = 6 + 12 * i, s = x[6 + 2 * i]!, r = x[7 + 2 * i]!;
+    const base = chartIndex(i), s = x[contactIndex(i)]!, r = x[contactIndex(i) + 1]!;
     const P = [0, 1, 2].map((j) => ops.add(c(base + j), ops.mul(s, c(base + 3 + j)), ops.mul(r, c(base + 6 + j))));
     const m = [0, 1, 2].map((j) => c(base + 9 + j));
     const a = CONIC_LETTERS.map((l) => par(`${l}${i + 1}`));

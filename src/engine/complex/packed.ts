@@ -63,6 +63,22 @@ export function dotc(out: Float64Array, a: Float64Array, b: Float64Array, n = a.
   out[1] = im;
 }
 
+/**
+ * Σ a_i·b_i (the bilinear product, no conjugation) of n packed complex entries read from offsets ao and bo, written to
+ * out[oo], out[oo + 1]; accumulated left to right from 0. The fixed-size unrolled kernels of a family's hot loop
+ * (conic-kernels.ts) stay unrolled on purpose.
+ */
+export function dotu(out: Float64Array, a: Float64Array, b: Float64Array, n: number, ao = 0, bo = 0, oo = 0): void {
+  let re = 0, im = 0;
+  for (let j = 0; j < n; j++) {
+    const ar = a[ao + 2 * j]!, ai = a[ao + 2 * j + 1]!, br = b[bo + 2 * j]!, bi = b[bo + 2 * j + 1]!;
+    re += ar * br - ai * bi;
+    im += ar * bi + ai * br;
+  }
+  out[oo] = re;
+  out[oo + 1] = im;
+}
+
 /** true when every entry is a finite number. */
 export function allFinite(v: Float64Array, length = v.length): boolean {
   for (let i = 0; i < length; i++) if (!Number.isFinite(v[i]!)) return false;

@@ -17,7 +17,7 @@ export type CompiledHomotopyArgs = {
   readonly projectiveGroups?: readonly (readonly number[])[];
   /** The double-double value evaluator's source of the same program (compileValuesInDoubleDouble), for extended precision. */
   readonly extendedSource?: string;
-} & ({ readonly p0: Float64Array; readonly p1: Float64Array; readonly gamma?: Float64Array } | { readonly fixed: Float64Array });
+} & ({ readonly p0: Float64Array; readonly p1: Float64Array; readonly gamma?: readonly [number, number] } | { readonly fixed: Float64Array });
 
 /** Pool homotopy module: rebuilds the compiled system from source text (cached) and returns the homotopy. */
 export function createHomotopy(args: CompiledHomotopyArgs): Homotopy {

@@ -2,16 +2,17 @@ import type { Homotopy } from '../homotopy.ts';
 import type { CompiledEquations } from '../compile/compile-system.ts';
 import type { DoubleDoubleValuesEvaluator } from '../dd/compile-values.ts';
 import { matVec } from '../complex/packed.ts';
+import { gammaArc } from '../parameter/gamma-arc.ts';
 
 /**
  * The coefficient-parameter homotopy H(x, t) = F(x; p(t)) of Morgan–Sommese (Appl. Math. Comput. 29, 1989)
- * on the straight segment p(t) = (1 − τ)·p0 + τ·p1. Without gamma τ = t; with gamma (packed [re, im]) the
- * gamma trick τ(t) = γt / (1 + (γ − 1)t), which keeps τ off the real segment for 0 < t < 1 while τ(0) = 0,
- * τ(1) = 1. ∂H/∂t = J_p·(p1 − p0)·dτ/dt. The compiled system must be square (neq = n). Buffers are made once. With
- * `extended` (the double-double value evaluator of the same program) it also offers evaluateValueExtended, with
- * p(t) as computed in double taken as exact.
+ * on the segment p(t) = p0 + τ(t)·(p1 − p0). Without gamma τ = t; with gamma [re, im] the engine's one gamma-trick
+ * convention, τ(t) = t / (γ(1 − t) + t) of parameter/gamma-arc.ts (the same arc as a ParameterLeg with that γ), which
+ * keeps τ off the real segment for 0 < t < 1 while τ(0) = 0, τ(1) = 1. ∂H/∂t = J_p·(p1 − p0)·dτ/dt. The compiled
+ * system must be square (neq = n). Buffers are made once. With `extended` (the double-double value evaluator of the
+ * same program) it also offers evaluateValueExtended, with p(t) as computed in double taken as exact.
  */
-export function parameterHomotopy(compiled: CompiledEquations, p0: Float64Array, p1: Float64Array, gamma?: Float64Array, extended?: DoubleDoubleValuesEvaluator): Homotopy {
+export function parameterHomotopy(compiled: CompiledEquations, p0: Float64Array, p1: Float64Array, gamma?: ArrayLike<number>, extended?: DoubleDoubleValuesEvaluator): Homotopy {
   const { n, np, neq } = compiled;
   if (neq !== n) throw new RangeError(`parameter homotopy needs a square system, got ${neq} equations in ${n} unknowns`);
   if (p0.length !== 2 * np || p1.length !== 2 * np) throw new RangeError(`parameter vectors must have length ${2 * np} (packed complex)`);
@@ -24,15 +25,7 @@ export function parameterHomotopy(compiled: CompiledEquations, p0: Float64Array,
   const tau = new Float64Array(4); // τ re, im, dτ/dt re, im
   const setTau = (tRe: number, tIm: number): void => {
     if (!gamma) { tau[0] = tRe; tau[1] = tIm; tau[2] = 1; tau[3] = 0; return; }
-    // d = 1 + (γ − 1)t ; τ = γt / d ; dτ/dt = γ / d²
-    const dRe = 1 + (gRe - 1) * tRe - gIm * tIm, dIm = (gRe - 1) * tIm + gIm * tRe;
-    const nRe = gRe * tRe - gIm * tIm, nIm = gRe * tIm + gIm * tRe;
-    const dd = dRe * dRe + dIm * dIm;
-    tau[0] = (nRe * dRe + nIm * dIm) / dd;
-    tau[1] = (nIm * dRe - nRe * dIm) / dd;
-    const sRe = dRe * dRe - dIm * dIm, sIm = 2 * dRe * dIm, ss = sRe * sRe + sIm * sIm;
-    tau[2] = (gRe * sRe + gIm * sIm) / ss;
-    tau[3] = (gIm * sRe - gRe * sIm) / ss;
+    gammaArc(tRe, tIm, gRe, gIm, tau);
   };
   const setParameters = (tRe: number, tIm: number): void => {
     setTau(tRe, tIm);

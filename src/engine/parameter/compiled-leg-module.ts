@@ -10,12 +10,10 @@ export interface CompiledLegConstants {
 
 /**
  * Parameter-homotopy module (the { ...constants, from, to, gamma } convention of module-tracker.ts) over any compiled
- * system: the engine's parameterHomotopy with its gamma set to 1/γ, which traces the same arc as gamma-arc.ts.
+ * system: the engine's parameterHomotopy, whose gamma is the leg's γ (one convention, gamma-arc.ts).
  */
 export function createHomotopy(args: CompiledLegConstants & { from: Float64Array; to: Float64Array; gamma: readonly [number, number] }): Homotopy {
-  const [gr, gi] = args.gamma;
-  const d = gr * gr + gi * gi;
-  return parameterHomotopy(compiledFromSource(args.source, args.shape), args.from, args.to, Float64Array.of(gr / d, -gi / d));
+  return parameterHomotopy(compiledFromSource(args.source, args.shape), args.from, args.to, args.gamma);
 }
 
 /** The file URL of this module, for HomotopyModuleRef.url. */

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import Complex from 'complex.js';
-import { axpy, cdiv, distInf, dotc, matVec, normInf, norm2, scale } from '../../../src/engine/complex/packed.ts';
+import { axpy, cdiv, distInf, dotc, dotu, matVec, normInf, norm2, scale } from '../../../src/engine/complex/packed.ts';
 
 // Reference values come from complex.js (a general-purpose complex-number library) or from hand arithmetic.
 const pack = (...zs: [number, number][]): Float64Array => new Float64Array(zs.flat());
@@ -34,6 +34,15 @@ describe('packed complex kernels', () => {
     dotc(out, a, a);
     expect(out[0]).toBe(30);
     expect(out[1]).toBe(0);
+  });
+  it('dotu does not conjugate and reads and writes at the given offsets (complex.js reference)', () => {
+    const a = pack([9, 9], [1, 2], [3, -4]), b = pack([2, -1], [0.5, 3]);
+    const out = new Float64Array(4);
+    dotu(out, a, b, 2, 2, 0, 2);
+    const ref = new Complex(1, 2).mul(new Complex(2, -1)).add(new Complex(3, -4).mul(new Complex(0.5, 3)));
+    expect(out[0]).toBe(0);
+    expect(out[2]).toBeCloseTo(ref.re, 14);
+    expect(out[3]).toBeCloseTo(ref.im, 14);
   });
   it('matVec multiplies a packed row-major matrix by a vector (complex.js reference)', () => {
     const m = pack([1, 1], [2, 0], [0, -1], [3, 2]);

@@ -3,6 +3,7 @@ import type { PolynomialSystem } from '../../../src/engine/expr/node.ts';
 import { add, mul, param, pow, sub, unknown } from '../../../src/engine/expr/build.ts';
 import { compileSystem } from '../../../src/engine/compile/compile-system.ts';
 import { parameterHomotopy } from '../../../src/engine/homotopies/parameter-homotopy.ts';
+import { gammaArc } from '../../../src/engine/parameter/gamma-arc.ts';
 import { createTracker } from '../../../src/engine/track/tracker.ts';
 import { solveSystem } from '../../../src/engine/solve/solve-system.ts';
 import { createRandom } from '../../../src/engine/random.ts';
@@ -64,6 +65,23 @@ describe('coefficient-parameter homotopy (Morgan–Sommese, Appl. Math. Comput. 
       compiled.evaluate(z, p, v, null, null);
       for (let i = 0; i < 4; i++) expect(h[i]).toBeCloseTo(v[i]!, 13);
     }
+  });
+
+  it.each([[0.25, 0], [0.5, 0.1], [0.9, -0.2]])('with gamma moves the parameters along the arc of gamma-arc.ts, τ(t) = t / (γ(1 − t) + t), at t = %f + %fi', (tRe, tIm) => {
+    // One gamma convention for every parameter homotopy of the engine (a ParameterLeg with γ traces the same arc).
+    const compiled = compileSystem({ unknowns: ['x'], parameters: ['c'], equations: [sub(x, param('c', 0))] });
+    const p0 = new Float64Array([1, 2]), p1 = new Float64Array([-3, 0.5]), gamma = [0.6, 0.8] as const;
+    const h = new Float64Array(2), jac = new Float64Array(2), ht = new Float64Array(2), arc = new Float64Array(4);
+    parameterHomotopy(compiled, p0, p1, gamma).evaluate(new Float64Array(2), tRe, tIm, h, jac, ht);
+    // by hand: d = γ(1 − t) + t, τ = t / d
+    const dRe = gamma[0] * (1 - tRe) + gamma[1] * tIm + tRe, dIm = gamma[1] * (1 - tRe) - gamma[0] * tIm + tIm, dd = dRe * dRe + dIm * dIm;
+    const tauRe = (tRe * dRe + tIm * dIm) / dd, tauIm = (tIm * dRe - tRe * dIm) / dd;
+    const deltaRe = p1[0]! - p0[0]!, deltaIm = p1[1]! - p0[1]!;
+    expect(-h[0]!).toBeCloseTo(p0[0]! + tauRe * deltaRe - tauIm * deltaIm, 14);
+    expect(-h[1]!).toBeCloseTo(p0[1]! + tauRe * deltaIm + tauIm * deltaRe, 14);
+    gammaArc(tRe, tIm, gamma[0], gamma[1], arc);
+    expect(arc[0]).toBeCloseTo(tauRe, 14);
+    expect(arc[1]).toBeCloseTo(tauIm, 14);
   });
 
   it('refuses a non-square system and wrong parameter lengths with clear messages', () => {
