@@ -47,7 +47,7 @@ export async function runOnCluster(ctx: CommandContext, job: ClusterJob, request
     ...(request.partition ? { partition: request.partition } : {}), publishTo: job.publishTo, force: job.force,
   };
   const run = submitRun(plan, services.slurm);
-  ctx.stderr.write(`${job.slug}: submitted ${request.shards} batches as job array ${run.batches}, retry array ${run.retry}, merge job ${run.merge}; run folder ${dir}\n`);
+  ctx.stderr.write(`${job.slug}: submitted ${request.shards} batch${request.shards === 1 ? '' : 'es'} as job array ${run.batches}, retry array ${run.retry}, merge job ${run.merge}; run folder ${dir}\n`);
   if (request.detach) {
     ctx.stdout.write(`${JSON.stringify({ slug: job.slug, run: dir, batches: run.batches, retry: run.retry, merge: run.merge, shards: request.shards })}\n`);
     return EXIT.ok;
