@@ -26,7 +26,7 @@ k="\${SLURM_ARRAY_TASK_ID:?run this as a task of a job array}"
 attempt="\${1:?attempt number}"
 part=${shellQuote(layout.parts)}/part-$k.json
 if [ -f "$part" ]; then echo "batch $k of ${n}: part already written"; exit 0; fi
-echo "batch $k of ${n} of ${plan.slug}, attempt $attempt, on $(hostname), job \${SLURM_JOB_ID:-?}"
+echo "batch $k of ${n} of ${plan.slug}, attempt $attempt, on $(hostname), job \${SLURM_JOB_ID:-?}, started $(date -u +%FT%T.%3NZ)"
 hook="\${${FAIL_HOOK_VARIABLE}:-}"
 case "$hook" in
   "$k"/[0-9]*) limit="\${hook#*/}" ;;
@@ -39,6 +39,7 @@ else
   cd ${shellQuote(plan.project)} && ${shellLine(solve)} --shard "$k/${n}" --out "$part"${extra.length ? ` ${shellLine(extra)}` : ''}
   code=$?
 fi
+echo "batch $k ended $(date -u +%FT%T.%3NZ) with exit code $code"
 if [ "$code" -ne 0 ]; then echo "$code" > ${shellQuote(layout.attempts)}/batch-$k-attempt-$attempt.failed; fi
 exit "$code"
 `;
