@@ -1,5 +1,5 @@
 import { execFileSync, spawnSync } from 'node:child_process';
-import { chmodSync, chownSync, existsSync, mkdirSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { chmodSync, chownSync, existsSync, mkdirSync, mkdtempSync, readdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { availableParallelism, hostname, tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { setTimeout as pause } from 'node:timers/promises';
@@ -14,9 +14,15 @@ export interface LocalSlurm {
 
 const MUNGE_KEY = '/etc/munge/munge.key';
 
+/** Pids of processes named exactly `name`, read from /proc (a bare machine may lack pgrep). */
 function running(name: string): number[] {
-  const r = spawnSync('pgrep', ['-x', name], { encoding: 'utf8' });
-  return r.stdout.split('\n').filter(Boolean).map(Number);
+  return readdirSync('/proc').filter((d) => /^\d+$/.test(d)).filter((d) => {
+    try {
+      return readFileSync(`/proc/${d}/comm`, 'utf8').trim() === name;
+    } catch {
+      return false; // the process ended while we looked
+    }
+  }).map(Number);
 }
 
 function pidFrom(file: string): number | undefined {
