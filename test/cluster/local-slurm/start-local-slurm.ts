@@ -14,11 +14,12 @@ export interface LocalSlurm {
 
 const MUNGE_KEY = '/etc/munge/munge.key';
 
-/** Pids of processes named exactly `name`, read from /proc (a bare machine may lack pgrep). */
+/** Pids of live processes named exactly `name` (zombies left), read from /proc (a bare machine may lack pgrep). */
 function running(name: string): number[] {
   return readdirSync('/proc').filter((d) => /^\d+$/.test(d)).filter((d) => {
     try {
-      return readFileSync(`/proc/${d}/comm`, 'utf8').trim() === name;
+      const m = /^\d+ \((.*)\) (\S)/.exec(readFileSync(`/proc/${d}/stat`, 'utf8'));
+      return m !== null && m[1] === name && m[2] !== 'Z';
     } catch {
       return false; // the process ended while we looked
     }
