@@ -22,9 +22,13 @@ export const HELP = `usage: node --experimental-strip-types generators/cli.ts <c
         [--shard k/n --out part.json]       solve one problem; print a summary (--json: one JSON object)
   regenerate [<slug | path>… | --all] [--force] [--workers N]
                                             solve and write records and pages (never worse unless --force)
+  solve|regenerate <slug | path> --slurm [--shards N] [--partition P] [--workdir DIR] [--detach]
+                                            run as a Slurm job array (one task per batch of paths), merge in a
+                                            dependent job; wait showing parts written, or --detach: print job ids
   refresh [--workers N]                     regenerate only stale problems (npm start runs this)
   check                                     validate every content file and every definition
-  merge <part.json>… [--json] [--force]     merge shard parts into one record and write it
+  merge <part.json>… [--json] [--force] [--record-file FILE] [--unpublished]
+                                            merge shard parts into one record and write it
 
   every command: --content DIR (default: env ATLAS_CONTENT_DIR, else ./content), --debug (stack traces)
 exit codes: 0 ok · 1 solve failed or worse result refused · 2 bad input · 3 corrupt content · 4 internal error
