@@ -17,6 +17,8 @@ import linesOnACubicSurface from './surfaces/lines-on-a-cubic-surface.ts';
 import linesMeetingFourLines from './schubert/lines-meeting-four-lines.ts';
 import flexesOfAPlaneCubic from './plane-curves/flexes-of-a-plane-cubic.ts';
 import bitangentsOfAPlaneQuartic from './plane-curves/bitangents-of-a-plane-quartic.ts';
+import flexesOfAPlaneQuartic from './plane-curves/flexes-of-a-plane-quartic.ts';
+import flexesOfAPlaneQuintic from './plane-curves/flexes-of-a-plane-quintic.ts';
 
 /** Every problem of the atlas, in the order the home page lists them. Slugs are permanent. */
 export const problems: readonly ProblemDefinition[] = [
@@ -38,4 +40,6 @@ export const problems: readonly ProblemDefinition[] = [
   linesMeetingFourLines,
   flexesOfAPlaneCubic,
   bitangentsOfAPlaneQuartic,
+  flexesOfAPlaneQuartic,
+  flexesOfAPlaneQuintic,
 ];
