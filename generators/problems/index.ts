@@ -19,6 +19,9 @@ import flexesOfAPlaneCubic from './plane-curves/flexes-of-a-plane-cubic.ts';
 import bitangentsOfAPlaneQuartic from './plane-curves/bitangents-of-a-plane-quartic.ts';
 import flexesOfAPlaneQuartic from './plane-curves/flexes-of-a-plane-quartic.ts';
 import flexesOfAPlaneQuintic from './plane-curves/flexes-of-a-plane-quintic.ts';
+import singularCubics from './plane-curves/singular-members-of-a-pencil-of-cubics.ts';
+import singularQuartics from './plane-curves/singular-members-of-a-pencil-of-quartics.ts';
+import singularQuintics from './plane-curves/singular-members-of-a-pencil-of-quintics.ts';
 
 /** Every problem of the atlas, in the order the home page lists them. Slugs are permanent. */
 export const problems: readonly ProblemDefinition[] = [
@@ -42,4 +45,7 @@ export const problems: readonly ProblemDefinition[] = [
   bitangentsOfAPlaneQuartic,
   flexesOfAPlaneQuartic,
   flexesOfAPlaneQuintic,
+  singularCubics,
+  singularQuartics,
+  singularQuintics,
 ];
