@@ -22,6 +22,7 @@ import flexesOfAPlaneQuintic from './plane-curves/flexes-of-a-plane-quintic.ts';
 import singularCubics from './plane-curves/singular-members-of-a-pencil-of-cubics.ts';
 import singularQuartics from './plane-curves/singular-members-of-a-pencil-of-quartics.ts';
 import singularQuintics from './plane-curves/singular-members-of-a-pencil-of-quintics.ts';
+import tangentLinesFromAPointToAQuartic from './plane-curves/tangent-lines-from-a-point-to-a-quartic.ts';
 
 /** Every problem of the atlas, in the order the home page lists them. Slugs are permanent. */
 export const problems: readonly ProblemDefinition[] = [
@@ -48,4 +49,5 @@ export const problems: readonly ProblemDefinition[] = [
   singularCubics,
   singularQuartics,
   singularQuintics,
+  tangentLinesFromAPointToAQuartic,
 ];
