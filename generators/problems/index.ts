@@ -23,6 +23,7 @@ import singularCubics from './plane-curves/singular-members-of-a-pencil-of-cubic
 import singularQuartics from './plane-curves/singular-members-of-a-pencil-of-quartics.ts';
 import singularQuintics from './plane-curves/singular-members-of-a-pencil-of-quintics.ts';
 import tangentLinesFromAPointToAQuartic from './plane-curves/tangent-lines-from-a-point-to-a-quartic.ts';
+import commonTangentLinesOfTwoConics from './plane-curves/common-tangent-lines-of-two-conics.ts';
 
 /** Every problem of the atlas, in the order the home page lists them. Slugs are permanent. */
 export const problems: readonly ProblemDefinition[] = [
@@ -50,4 +51,5 @@ export const problems: readonly ProblemDefinition[] = [
   singularQuartics,
   singularQuintics,
   tangentLinesFromAPointToAQuartic,
+  commonTangentLinesOfTwoConics,
 ];
