@@ -5,6 +5,7 @@ import { genericInstance } from '../shared/generic-instance.ts';
 import { coefficientsOf } from '../shared/numeric-polynomial.ts';
 import { ellipseForm } from '../shared/ellipse-form.ts';
 import { fitWindow } from '../shared/fit-window.ts';
+import { fultonCurves } from '../shared/fulton-curves.ts';
 
 type Six = [number, number, number, number, number, number];
 const exponents = monomialExponents(2, 2);
@@ -62,13 +63,7 @@ export default defineProblem({
   trueCount: {
     value: 4,
     source: {
-      kind: 'published',
-      authors: ['W. Fulton'],
-      year: 1969,
-      title: 'Algebraic Curves: An Introduction to Algebraic Geometry',
-      venue: 'W. A. Benjamin (1969); the author’s free electronic edition of 2008 is linked',
-      url: 'https://dept.math.lsa.umich.edu/~wfulton/CurveBook.pdf',
-      bib: { type: 'book', publisher: 'W. A. Benjamin' },
+      ...fultonCurves,
       note: 'Bézout’s theorem for plane curves, applied in the dual plane: the tangent lines of a smooth conic form a conic there (its equation is the adjugate matrix), and two general conics meet in 4 points. The duality step is classical (Poncelet, Plücker; from memory).',
     },
   },
