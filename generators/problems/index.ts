@@ -24,6 +24,8 @@ import singularQuartics from './plane-curves/singular-members-of-a-pencil-of-qua
 import singularQuintics from './plane-curves/singular-members-of-a-pencil-of-quintics.ts';
 import tangentLinesFromAPointToAQuartic from './plane-curves/tangent-lines-from-a-point-to-a-quartic.ts';
 import commonTangentLinesOfTwoConics from './plane-curves/common-tangent-lines-of-two-conics.ts';
+import pointsCommonToThreeQuadricSurfaces from './intersections/points-common-to-three-quadric-surfaces.ts';
+import pointsCommonToThreeCubicSurfaces from './intersections/points-common-to-three-cubic-surfaces.ts';
 
 /** Every problem of the atlas, in the order the home page lists them. Slugs are permanent. */
 export const problems: readonly ProblemDefinition[] = [
@@ -52,4 +54,6 @@ export const problems: readonly ProblemDefinition[] = [
   singularQuintics,
   tangentLinesFromAPointToAQuartic,
   commonTangentLinesOfTwoConics,
+  pointsCommonToThreeQuadricSurfaces,
+  pointsCommonToThreeCubicSurfaces,
 ];
