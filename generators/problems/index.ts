@@ -26,6 +26,9 @@ import tangentLinesFromAPointToAQuartic from './plane-curves/tangent-lines-from-
 import commonTangentLinesOfTwoConics from './plane-curves/common-tangent-lines-of-two-conics.ts';
 import pointsCommonToThreeQuadricSurfaces from './intersections/points-common-to-three-quadric-surfaces.ts';
 import pointsCommonToThreeCubicSurfaces from './intersections/points-common-to-three-cubic-surfaces.ts';
+import euclideanDistanceDegreeOfAnEllipse from './distance-and-optimisation/euclidean-distance-degree-of-an-ellipse.ts';
+import euclideanDistanceDegreeOfAPlaneCubic from './distance-and-optimisation/euclidean-distance-degree-of-a-plane-cubic.ts';
+import euclideanDistanceDegreeOfAPlaneQuartic from './distance-and-optimisation/euclidean-distance-degree-of-a-plane-quartic.ts';
 
 /** Every problem of the atlas, in the order the home page lists them. Slugs are permanent. */
 export const problems: readonly ProblemDefinition[] = [
@@ -56,4 +59,7 @@ export const problems: readonly ProblemDefinition[] = [
   commonTangentLinesOfTwoConics,
   pointsCommonToThreeQuadricSurfaces,
   pointsCommonToThreeCubicSurfaces,
+  euclideanDistanceDegreeOfAnEllipse,
+  euclideanDistanceDegreeOfAPlaneCubic,
+  euclideanDistanceDegreeOfAPlaneQuartic,
 ];

@@ -1,15 +1,11 @@
 import { defineProblem } from '../../../src/atlas/definition.ts';
 import { monomialExponents } from '../shared/monomials.ts';
-import { coefficientsOf, linearForm, product, sum } from '../shared/numeric-polynomial.ts';
-import { ellipseForm } from '../shared/ellipse-form.ts';
+import { coefficientsOf } from '../shared/numeric-polynomial.ts';
+import { fourArmedQuartic } from '../shared/four-armed-quartic.ts';
 import { flexProblem } from './flex-problem.ts';
 
-/**
- * Demo quartic: E₁·E₂ = 0.1 for two crossing ellipses (semi-axes 2.2 × 1 turned 0.3 rad, 1.1 × 2 turned 0.25 rad,
- * centres near the origin). The curve hugs the outline of their union, a four-armed cross whose four concave corners
- * each carry two flexes, and the outline of their common part, a convex oval: 8 real flexes, Klein's maximum.
- */
-const cross = sum(product(ellipseForm(2.2, 1, 0.3, 0.1, -0.1), ellipseForm(1.1, 2, 0.25, -0.1, 0.05)), linearForm([0, 0], -0.1));
+/** Demo quartic: the four-armed quartic, 8 real flexes (two in each concave corner), Klein's maximum for quartics. */
+const cross = fourArmedQuartic();
 
 export default defineProblem(flexProblem({
   slug: 'flexes-of-a-plane-quartic',

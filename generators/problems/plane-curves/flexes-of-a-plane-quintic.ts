@@ -1,7 +1,7 @@
 import { defineProblem } from '../../../src/atlas/definition.ts';
 import { monomialExponents } from '../shared/monomials.ts';
 import { coefficientsOf, linearForm, product, sum } from '../shared/numeric-polynomial.ts';
-import { ellipseForm } from '../shared/ellipse-form.ts';
+import { fourArmedQuartic } from '../shared/four-armed-quartic.ts';
 import { flexProblem } from './flex-problem.ts';
 
 /**
@@ -10,7 +10,7 @@ import { flexProblem } from './flex-problem.ts';
  * general. Chosen among a few such smoothings for its many real flexes: 13 of 45 (Klein's bound is 15).
  */
 const quintic = sum(
-  product(sum(product(ellipseForm(2.2, 1, 0.3, 0.1, -0.1), ellipseForm(1.1, 2, 0.25, -0.1, 0.05)), linearForm([0, 0], -0.1)), linearForm([1, 0.3], 0.2)),
+  product(fourArmedQuartic(), linearForm([1, 0.3], 0.2)),
   linearForm([0, 0], 0.02),
   product(linearForm([1, 0]), linearForm([0, 1]), linearForm([1, -1]), linearForm([1, 2]), linearForm([1, -0.5]), linearForm([0, 0], 0.003)),
 );

@@ -6,8 +6,8 @@ import { gradientOnChart } from '../shared/gradient.ts';
 import type { PlaneWindow } from '../shared/contour.ts';
 import { planeCurveItems } from '../shared/plane-curve-items.ts';
 import { genericInstance } from '../shared/generic-instance.ts';
-import { coefficientsOf, linearForm, product, sum } from '../shared/numeric-polynomial.ts';
-import { ellipseForm } from '../shared/ellipse-form.ts';
+import { coefficientsOf } from '../shared/numeric-polynomial.ts';
+import { fourArmedQuartic } from '../shared/four-armed-quartic.ts';
 import { pluckerBook } from './plucker-book.ts';
 
 const exponents = monomialExponents(2, 4);
@@ -16,7 +16,7 @@ const view: PlaneWindow = { xMin: -3.2, xMax: 3.2, yMin: -3.2, yMax: 3.2 };
 
 /** The demo: the four-armed quartic E₁·E₂ = 0.1 of the quartic flex page, seen from a lamp
  * at (−2.2, −0.8) beside it: on a 0.2 grid of lamp positions in the window no point saw more than 8 real tangents. */
-const demoQuartic = coefficientsOf(sum(product(ellipseForm(2.2, 1, 0.3, 0.1, -0.1), ellipseForm(1.1, 2, 0.25, -0.1, 0.05)), linearForm([0, 0], -0.1)), exponents);
+const demoQuartic = coefficientsOf(fourArmedQuartic(), exponents);
 const lamp = [-2.2, -0.8] as const;
 
 const demoParameters: Record<string, ComplexInput> = Object.fromEntries([...demoQuartic.map((c, m) => [names[m]!, c] as const), ['a', lamp[0]] as const, ['b', lamp[1]] as const]);
