@@ -29,6 +29,7 @@ import pointsCommonToThreeCubicSurfaces from './intersections/points-common-to-t
 import euclideanDistanceDegreeOfAnEllipse from './distance-and-optimisation/euclidean-distance-degree-of-an-ellipse.ts';
 import euclideanDistanceDegreeOfAPlaneCubic from './distance-and-optimisation/euclidean-distance-degree-of-a-plane-cubic.ts';
 import euclideanDistanceDegreeOfAPlaneQuartic from './distance-and-optimisation/euclidean-distance-degree-of-a-plane-quartic.ts';
+import euclideanDistanceDegreeOfAQuadricSurface from './distance-and-optimisation/euclidean-distance-degree-of-a-quadric-surface.ts';
 
 /** Every problem of the atlas, in the order the home page lists them. Slugs are permanent. */
 export const problems: readonly ProblemDefinition[] = [
@@ -62,4 +63,5 @@ export const problems: readonly ProblemDefinition[] = [
   euclideanDistanceDegreeOfAnEllipse,
   euclideanDistanceDegreeOfAPlaneCubic,
   euclideanDistanceDegreeOfAPlaneQuartic,
+  euclideanDistanceDegreeOfAQuadricSurface,
 ];
