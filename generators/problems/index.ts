@@ -30,6 +30,8 @@ import euclideanDistanceDegreeOfAnEllipse from './distance-and-optimisation/eucl
 import euclideanDistanceDegreeOfAPlaneCubic from './distance-and-optimisation/euclidean-distance-degree-of-a-plane-cubic.ts';
 import euclideanDistanceDegreeOfAPlaneQuartic from './distance-and-optimisation/euclidean-distance-degree-of-a-plane-quartic.ts';
 import euclideanDistanceDegreeOfAQuadricSurface from './distance-and-optimisation/euclidean-distance-degree-of-a-quadric-surface.ts';
+import eigenvectorsOfASymmetricTernaryCubic from './distance-and-optimisation/eigenvectors-of-a-symmetric-ternary-cubic.ts';
+import eigenvectorsOfASymmetricTernaryQuartic from './distance-and-optimisation/eigenvectors-of-a-symmetric-ternary-quartic.ts';
 
 /** Every problem of the atlas, in the order the home page lists them. Slugs are permanent. */
 export const problems: readonly ProblemDefinition[] = [
@@ -64,4 +66,6 @@ export const problems: readonly ProblemDefinition[] = [
   euclideanDistanceDegreeOfAPlaneCubic,
   euclideanDistanceDegreeOfAPlaneQuartic,
   euclideanDistanceDegreeOfAQuadricSurface,
+  eigenvectorsOfASymmetricTernaryCubic,
+  eigenvectorsOfASymmetricTernaryQuartic,
 ];
