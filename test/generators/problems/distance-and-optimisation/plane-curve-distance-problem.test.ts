@@ -34,7 +34,7 @@ describe('critical points of the distance to a plane curve: the formulation', ()
   });
 
   it('draws each real critical point with the straight segment from the given point', () => {
-    const [segment, point] = definition.drawing!.solution([3, 0], ellipse) as [{ points: [number, number][] }, { x: number; y: number }];
+    const [segment, point] = definition.drawing!.solution([3, 0], ellipse) as unknown as [{ points: [number, number][] }, { x: number; y: number }];
     expect(segment.points).toEqual([[0.5, 0], [3, 0]]);
     expect([point.x, point.y]).toEqual([3, 0]);
   });

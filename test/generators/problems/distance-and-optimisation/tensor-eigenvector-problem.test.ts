@@ -7,7 +7,7 @@ import { largestResidual, paramsFrom, real } from '../shared/evaluate.ts';
 
 /** The page of order d with the Fermat form x^d + y^d + z^d as its demo (our own example). */
 function fermat(d: number) {
-  const coefficients = monomialExponents(2, d).map(([i, j]) => (i === d || j === d || i + j === 0 ? 1 : 0));
+  const coefficients = monomialExponents(2, d).map(([i, j]) => (i === d || j === d || i! + j! === 0 ? 1 : 0));
   return tensorEigenvectorProblem({ slug: `eigen-${d}`, degree: d, noun: 'form', genericSeed: 1, view: { xMin: -1, xMax: 1, yMin: -1, yMax: 1 }, demo: { id: 'fermat', label: 'fermat', description: 'fermat', seed: 1, coefficients } });
 }
 

@@ -24,7 +24,7 @@ describe('tangent lines from a point to a plane quartic: the formulation', () =>
   });
 
   it('draws the tangent as the line through the point and its point of contact', () => {
-    const [line, point] = definition.drawing!.solution(contact, fermat) as [{ a: number; b: number; c: number }, { x: number; y: number }];
+    const [line, point] = definition.drawing!.solution(contact, fermat) as unknown as [{ a: number; b: number; c: number }, { x: number; y: number }];
     for (const [x, y] of [[2, 0], [point.x, point.y]]) expect(line.a * x! + line.b * y! + line.c).toBeCloseTo(0, 12);
   });
 });

@@ -21,7 +21,7 @@ describe('the orthographic view of 3-space', () => {
 
   it('draws twelve cube edges and a point with its drop line to the floor', () => {
     expect(cubeEdges(2, 'given', 'frame')).toHaveLength(12);
-    const [point, drop] = pointWithDrop(0.5, -0.3, 1, 2) as [{ x: number; y: number }, { points: [number, number][] }];
+    const [point, drop] = pointWithDrop(0.5, -0.3, 1, 2) as unknown as [{ x: number; y: number }, { points: [number, number][] }];
     expect(drop.points[1]).toEqual([point.x, point.y]);
     expect(drop.points[0]).toEqual(project(0.5, -0.3, -2));
   });

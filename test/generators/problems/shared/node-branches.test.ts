@@ -12,7 +12,7 @@ describe('the branches drawn through a double point', () => {
   ])('%s', (_, coefficients, expected) => {
     const items = nodeBranches(coefficients as number[], exponents, 0, 0, 1, 'branches');
     const slopes = items.map((item) => {
-      const [[x0, y0], [x1, y1]] = (item as { points: [number, number][] }).points;
+      const [[x0, y0], [x1, y1]] = (item as unknown as { points: [[number, number], [number, number]] }).points;
       expect(Math.hypot(x1 - x0, y1 - y0)).toBeCloseTo(2, 12);
       return Math.atan2(y1 - y0, x1 - x0);
     });
