@@ -7,17 +7,19 @@ import type { PlaneWindow } from '../shared/contour.ts';
 import { planeCurveItems } from '../shared/plane-curve-items.ts';
 import { genericInstance } from '../shared/generic-instance.ts';
 import { coefficientsOf } from '../shared/numeric-polynomial.ts';
-import { fourArmedQuartic } from '../shared/four-armed-quartic.ts';
+import { fourLobedQuartic } from '../shared/four-lobed-quartic.ts';
 import { pluckerBook } from './plucker-book.ts';
 
 const exponents = monomialExponents(2, 4);
 const names = coefficientNames('c', 2, 4);
 const view: PlaneWindow = { xMin: -3.2, xMax: 3.2, yMin: -3.2, yMax: 3.2 };
 
-/** The demo: the four-armed quartic E₁·E₂ = 0.1 of the quartic flex page, seen from a lamp
- * at (−2.2, −0.8) beside it: on a 0.2 grid of lamp positions in the window no point saw more than 8 real tangents. */
-const demoQuartic = coefficientsOf(fourArmedQuartic(), exponents);
-const lamp = [-2.2, -0.8] as const;
+/**
+ * The demo: the four-lobed quartic E₁·E₂ = 0.1 of the quartic flex page, seen from a lamp at (−0.8, 2.6) above it: on a
+ * 0.2 grid of lamp positions in the window no point saw more than 8 real tangents, and this one sees 8 well apart.
+ */
+const demoQuartic = coefficientsOf(fourLobedQuartic(), exponents);
+const lamp = [-0.8, 2.6] as const;
 
 const demoParameters: Record<string, ComplexInput> = Object.fromEntries([...demoQuartic.map((c, m) => [names[m]!, c] as const), ['a', lamp[0]] as const, ['b', lamp[1]] as const]);
 
@@ -52,10 +54,10 @@ const definition: ProblemDefinition = {
   instances: [
     genericInstance('A random complex quartic and point', 20261106, 'All 15 coefficients and the point (a, b)'),
     {
-      id: 'lamp-by-a-screen',
+      id: 'lamp-above-a-screen',
       kind: 'demo',
-      label: 'A lamp beside a four-armed screen',
-      description: 'A lamp stands at $(-2.2, -0.8)$ beside a frosted glass screen whose outline is the four-armed quartic $E_1 E_2 = 0.1$ (two crossing ellipses, as on the flex page), with a clear oval window in its middle. Each straight edge of light and shadow on the floor is a tangent line from the lamp to an outline. Of the $12$ tangents, $8$ are real.',
+      label: 'A lamp above a four-lobed screen',
+      description: 'A lamp hangs at $(-0.8, 2.6)$ above a frosted glass screen whose outline is the four-lobed quartic $E_1 E_2 = 0.1$ (two crossing ellipses, as on the flex page), with a clear oval window in its middle. Each straight edge of light and shadow on the floor is a tangent line from the lamp to an outline. Of the $12$ tangents, $8$ are real.',
       seed: 59,
       parameters: demoParameters,
     },

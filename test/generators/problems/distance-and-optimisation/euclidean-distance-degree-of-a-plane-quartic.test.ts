@@ -11,7 +11,7 @@ describe('solving for the critical distances from a point to a quartic', () => {
     expect(report.stats).toMatchObject({ tracked: 16, regular: 16, singular: 0, atInfinity: 0, failed: 0 });
   });
 
-  it('the fountain in the four-armed pond: 16 critical points, 16 real, each drawn with its segment', async () => {
+  it('the fountain in the four-lobed pond: 16 critical points, 16 real, each drawn with its segment', async () => {
     const demo = demoInstance(definition, 'fountain-in-a-pond');
     const solved = await solveInstance(definition, demo);
     expect(solved.report.solutions).toHaveLength(16);

@@ -11,8 +11,8 @@ describe('solving flexes of a plane quartic', () => {
     expect(report.stats).toMatchObject({ tracked: 24, regular: 24, singular: 0, atInfinity: 0, failed: 0 });
   });
 
-  it('the four-armed biscuit cutter: 24 flexes, 8 real, the most a real quartic can have', async () => {
-    const solved = await solveInstance(definition, demoInstance(definition, 'four-armed-biscuit'));
+  it('the four-lobed biscuit cutter: 24 flexes, 8 real, the most a real quartic can have', async () => {
+    const solved = await solveInstance(definition, demoInstance(definition, 'four-lobed-biscuit'));
     expect(solved.report.solutions).toHaveLength(24);
     // At most d(d − 2) = 8 real flexes (Klein, Math. Ann. 10, 1876; from memory).
     expect(solved.real).toBe(8);

@@ -12,7 +12,7 @@ describe('solving flexes of a plane quintic', () => {
   });
 
   it('the pond and causeway quintic: 45 flexes, 13 real, within the bound of 15', async () => {
-    const solved = await solveInstance(definition, demoInstance(definition, 'cut-cross'));
+    const solved = await solveInstance(definition, demoInstance(definition, 'pond-and-causeway'));
     expect(solved.report.solutions).toHaveLength(45);
     // At most d(d − 2) = 15 real flexes (Klein, Math. Ann. 10, 1876; from memory); 13 is our demo's measured count.
     expect(solved.real).toBe(13);

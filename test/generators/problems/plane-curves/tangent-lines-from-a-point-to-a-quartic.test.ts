@@ -38,8 +38,8 @@ describe('solving for the tangent lines from a point to a plane quartic', () => 
     expect(report.stats).toMatchObject({ tracked: 12, regular: 12, singular: 0, atInfinity: 0, failed: 0 });
   });
 
-  it('the lamp beside the four-armed screen: 12 tangents, 8 real, each drawn with its point of contact', async () => {
-    const demo = demoInstance(definition, 'lamp-by-a-screen');
+  it('the lamp above the four-lobed screen: 12 tangents, 8 real, each drawn with its point of contact', async () => {
+    const demo = demoInstance(definition, 'lamp-above-a-screen');
     const solved = await solveInstance(definition, demo);
     expect(solved.report.solutions).toHaveLength(12);
     expect(solved.real).toBe(8); // measured on our demo data (no source)
