@@ -37,7 +37,7 @@ export function tensorEigenvectorProblem(spec: TensorEigenvectorSpec): ProblemDe
     title: `The ${count} eigenvectors of a symmetric ternary ${spec.noun} tensor`,
     family: 'distance-and-optimisation',
     tags: ['tensors', 'eigenvectors', 'symmetric tensors', 'critical points', 'optimisation', 'sphere', spec.noun],
-    statement: `A symmetric tensor of order $${d}$ on $\\mathbb{C}^3$ is the same as a ternary form $F(x, y, z)$ of degree $${d}$. A nonzero vector $v$ is an eigenvector when $T v^{${d - 1}} = \\lambda v$, that is when $\\nabla F(v)$ is parallel to $v$; for real data these are the critical points of $F$ on the unit sphere. Find all eigenvectors, up to scaling, of a general symmetric tensor: there are exactly $((d - 1)^n - 1)/(d - 2) = ${count}$ for $n = 3$, $d = ${d}$.`,
+    statement: `A symmetric tensor $T$ of order $${d}$ on $\\mathbb{C}^3$ is the same as the ternary form $F(v) = T v^{${d}}$ of degree $${d}$. A nonzero vector $v$ is an eigenvector when $T v^{${d - 1}} = \\lambda v$, that is when $\\nabla F(v)$ is parallel to $v$; for real data these are the critical points of $F$ on the unit sphere. Find all eigenvectors, up to scaling, of a general symmetric tensor: there are exactly $((d - 1)^n - 1)/(d - 2) = ${count}$ for $n = 3$, $d = ${d}$.`,
     formulation: {
       unknowns: ['a', 'b'],
       parameters: names,
