@@ -12,8 +12,12 @@ const system = systemOf(definition);
 const ellipse: Record<string, number> = { c20: 1 / 9, c11: 0, c02: 1 / 4, c10: 0, c01: 0, c00: -1, a: 0.5, b: 0 };
 
 describe('critical points of the distance to a plane curve: the formulation', () => {
-  it('has the Bézout bound d² = 4 for a conic (two quadrics; our own derivation)', () => {
-    expect(bezoutBound(system)).toBe(4);
+  it.each([[2, 4], [3, 9], [4, 16]])('degree %i: two equations of degree d, Bézout bound %i = d² (our own derivation)', (d, bound) => {
+    const curve = planeCurveDistanceProblem({
+      slug: `curve-${d}`, degree: d, title: 'curve', curve: 'a curve', tags: [], genericSeed: 1, realNote: '', view: { xMin: -1, xMax: 1, yMin: -1, yMax: 1 },
+      demo: { id: 'zero', label: 'zero', description: 'zero', seed: 1, coefficients: new Array(((d + 1) * (d + 2)) / 2).fill(1), point: [0, 0] },
+    });
+    expect(bezoutBound(systemOf(curve))).toBe(bound);
   });
 
   it('is solved by the vertex (3, 0) of x²/9 + y²/4 = 1 seen from (0.5, 0), not by the co-vertex (0, 2)', () => {
