@@ -17,6 +17,21 @@ import linesOnACubicSurface from './surfaces/lines-on-a-cubic-surface.ts';
 import linesMeetingFourLines from './schubert/lines-meeting-four-lines.ts';
 import flexesOfAPlaneCubic from './plane-curves/flexes-of-a-plane-cubic.ts';
 import bitangentsOfAPlaneQuartic from './plane-curves/bitangents-of-a-plane-quartic.ts';
+import flexesOfAPlaneQuartic from './plane-curves/flexes-of-a-plane-quartic.ts';
+import flexesOfAPlaneQuintic from './plane-curves/flexes-of-a-plane-quintic.ts';
+import singularCubics from './plane-curves/singular-members-of-a-pencil-of-cubics.ts';
+import singularQuartics from './plane-curves/singular-members-of-a-pencil-of-quartics.ts';
+import singularQuintics from './plane-curves/singular-members-of-a-pencil-of-quintics.ts';
+import tangentLinesFromAPointToAQuartic from './plane-curves/tangent-lines-from-a-point-to-a-quartic.ts';
+import commonTangentLinesOfTwoConics from './plane-curves/common-tangent-lines-of-two-conics.ts';
+import pointsCommonToThreeQuadricSurfaces from './intersections/points-common-to-three-quadric-surfaces.ts';
+import pointsCommonToThreeCubicSurfaces from './intersections/points-common-to-three-cubic-surfaces.ts';
+import euclideanDistanceDegreeOfAnEllipse from './distance-and-optimisation/euclidean-distance-degree-of-an-ellipse.ts';
+import euclideanDistanceDegreeOfAPlaneCubic from './distance-and-optimisation/euclidean-distance-degree-of-a-plane-cubic.ts';
+import euclideanDistanceDegreeOfAPlaneQuartic from './distance-and-optimisation/euclidean-distance-degree-of-a-plane-quartic.ts';
+import euclideanDistanceDegreeOfAQuadricSurface from './distance-and-optimisation/euclidean-distance-degree-of-a-quadric-surface.ts';
+import eigenvectorsOfASymmetricTernaryCubic from './distance-and-optimisation/eigenvectors-of-a-symmetric-ternary-cubic.ts';
+import eigenvectorsOfASymmetricTernaryQuartic from './distance-and-optimisation/eigenvectors-of-a-symmetric-ternary-quartic.ts';
 
 /** Every problem of the atlas, in the order the home page lists them. Slugs are permanent. */
 export const problems: readonly ProblemDefinition[] = [
@@ -38,4 +53,19 @@ export const problems: readonly ProblemDefinition[] = [
   linesMeetingFourLines,
   flexesOfAPlaneCubic,
   bitangentsOfAPlaneQuartic,
+  flexesOfAPlaneQuartic,
+  flexesOfAPlaneQuintic,
+  singularCubics,
+  singularQuartics,
+  singularQuintics,
+  tangentLinesFromAPointToAQuartic,
+  commonTangentLinesOfTwoConics,
+  pointsCommonToThreeQuadricSurfaces,
+  pointsCommonToThreeCubicSurfaces,
+  euclideanDistanceDegreeOfAnEllipse,
+  euclideanDistanceDegreeOfAPlaneCubic,
+  euclideanDistanceDegreeOfAPlaneQuartic,
+  euclideanDistanceDegreeOfAQuadricSurface,
+  eigenvectorsOfASymmetricTernaryCubic,
+  eigenvectorsOfASymmetricTernaryQuartic,
 ];

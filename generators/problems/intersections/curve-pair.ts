@@ -6,6 +6,7 @@ import type { PlaneWindow } from '../shared/contour.ts';
 import { planeCurveItems } from '../shared/plane-curve-items.ts';
 import { genericInstance } from '../shared/generic-instance.ts';
 import { fitWindow } from '../shared/fit-window.ts';
+import { fultonCurves } from '../shared/fulton-curves.ts';
 
 /** What distinguishes one "two plane curves meet" problem from another. */
 export interface CurvePairSpec {
@@ -50,13 +51,7 @@ export function curvePairProblem(spec: CurvePairSpec): ProblemDefinition {
     trueCount: {
       value: d * d,
       source: {
-        kind: 'published',
-        authors: ['W. Fulton'],
-        year: 1969,
-        title: 'Algebraic Curves: An Introduction to Algebraic Geometry',
-        venue: 'W. A. Benjamin (1969); the author’s free electronic edition of 2008 is linked',
-        url: 'https://dept.math.lsa.umich.edu/~wfulton/CurveBook.pdf',
-        bib: { type: 'book', publisher: 'W. A. Benjamin' },
+        ...fultonCurves,
         note: "Bézout's theorem for plane curves. That Bézout stated it in 1779 is from memory.",
       },
     },

@@ -7,6 +7,7 @@ import type { PlaneWindow } from '../shared/contour.ts';
 import { planeCurveItems } from '../shared/plane-curve-items.ts';
 import { genericInstance } from '../shared/generic-instance.ts';
 import { coefficientsOf, linearForm, product, sum } from '../shared/numeric-polynomial.ts';
+import { pluckerBook } from './plucker-book.ts';
 
 const exponents = monomialExponents(2, 4);
 const names = coefficientNames('c', 2, 4);
@@ -94,12 +95,7 @@ export default defineProblem({
   trueCount: {
     value: 28,
     source: {
-      kind: 'published',
-      authors: ['J. Plücker'],
-      year: 1839,
-      title: 'Theorie der algebraischen Curven',
-      venue: 'Bonn (1839)',
-      bib: { type: 'book', address: 'Bonn' },
+      ...pluckerBook,
       note: 'The book’s formula for the double tangents of a curve of degree d without singular points, ½d(d − 2)(d² − 9), gives 28 for d = 4 (p. 211, as Cayley cites it in 1849). From memory, not re-read: that the book shows a quartic with four ovals and 28 real bitangents, its publisher (Adolph Marcus), and that the real counts 28, 16, 8, 4 are Zeuthen’s (1873).',
     },
   },

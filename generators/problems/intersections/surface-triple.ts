@@ -1,0 +1,63 @@
+import type { ComplexInput, ProblemDefinition } from '../../../src/atlas/definition.ts';
+import { coefficientNames, monomialExponents } from '../shared/monomials.ts';
+import { polynomial } from '../shared/form.ts';
+import { genericInstance } from '../shared/generic-instance.ts';
+import { cubeEdges, pointWithDrop } from '../shared/axonometric.ts';
+import { fitWindow } from '../shared/fit-window.ts';
+
+/** What distinguishes one "three surfaces of degree d meet" page from another. */
+export interface SurfaceTripleSpec {
+  readonly slug: string;
+  readonly degree: number;
+  readonly noun: string;
+  readonly genericSeed: number;
+  /** Coefficients of the three demo surfaces in monomialExponents(3, d) order. */
+  readonly demo: { id: string; label: string; description: string; seed: number; surfaces: readonly [readonly number[], readonly number[], readonly number[]] };
+  /** Half-width of the cube drawn around the demo's real points. */
+  readonly frame: number;
+}
+
+/** Three general surfaces of degree d in 3-space meet in d³ points (Bézout); the formulation is the three equations in (x, y, z). */
+export function surfaceTripleProblem(spec: SurfaceTripleSpec): ProblemDefinition {
+  const d = spec.degree;
+  const exponents = monomialExponents(3, d);
+  const names = ['p', 'q', 'r'].map((prefix) => coefficientNames(prefix, 3, d));
+  const parameters: Record<string, ComplexInput> = Object.fromEntries(names.flatMap((group, k) => group.map((n, m) => [n, spec.demo.surfaces[k]![m]!] as const)));
+  const frame = () => cubeEdges(spec.frame, 'given', 'frame');
+  return {
+    slug: spec.slug,
+    title: `Points common to three ${spec.noun} surfaces`,
+    family: 'intersections',
+    tags: ['Bézout', 'surfaces', 'intersection', `${spec.noun} surfaces`, '3-space', 'Bézout bound exact'],
+    statement: `Three general ${spec.noun} surfaces $p = 0$, $q = 0$, $r = 0$ in 3-space, each the zero set of a polynomial of degree $${d}$ in $(x, y, z)$ with $${exponents.length}$ coefficients, meet in $${d} \\cdot ${d} \\cdot ${d} = ${d ** 3}$ points of complex projective 3-space (Bézout's theorem). For general coefficients all of them are finite.`,
+    formulation: {
+      unknowns: ['x', 'y', 'z'],
+      parameters: names.flat(),
+      equations: (u, c, ops) => names.map((group) => polynomial(ops, group.map((n) => c[n]!), exponents, [u.x!, u.y!, u.z!])),
+      description: `The affine coordinates $(x, y, z)$ of a common point; three equations of degree $${d}$, so the Bézout bound is $${d ** 3}$.`,
+    },
+    trueCount: {
+      value: d ** 3,
+      source: {
+        kind: 'published',
+        authors: ['W. Fulton'],
+        year: 1984,
+        title: 'Intersection Theory',
+        venue: 'Springer, Ergebnisse der Mathematik und ihrer Grenzgebiete 3. Folge, Band 2 (1984)',
+        bib: { type: 'book', publisher: 'Springer', address: 'Berlin' },
+        note: `Bézout's theorem in projective space: n general hypersurfaces of degrees d₁, …, dₙ in Pⁿ meet in d₁⋯dₙ points, ${d ** 3} here (the book's chapter 8 on intersections in projective space; chapter and series details from memory).`,
+      },
+    },
+    excessNote: `None: three general ${spec.noun} surfaces meet transversally in exactly $${d ** 3}$ points, none on the plane at infinity (the top-degree parts of three general forms have no common zero there), so every path of the total-degree homotopy ends at a distinct solution. Excess appears only in special position, for instance when the three surfaces share a curve.`,
+    instances: [
+      genericInstance(`Three random complex ${spec.noun} surfaces`, spec.genericSeed, `All ${3 * exponents.length} coefficients`),
+      { id: spec.demo.id, kind: 'demo', label: spec.demo.label, description: spec.demo.description, seed: spec.demo.seed, parameters },
+    ],
+    drawing: {
+      projection: `An orthographic view of 3-space, turned 0.5 rad about the vertical z-axis and tilted 0.45 rad toward the viewer; the cube from −${spec.frame} to ${spec.frame} on each axis is drawn for scale, and a thin line drops from each real point to the cube's floor.`,
+      window: (_, items) => fitWindow([...frame(), ...(items ?? [])], 0.05),
+      configuration: frame,
+      solution: ([x, y, z]) => pointWithDrop(x!, y!, z!, spec.frame),
+    },
+  };
+}
