@@ -24,3 +24,6 @@ export { runTraceTest, TRACE_TOLERANCE, type TraceTestOptions, type TraceTestRep
 export type { RecoveredSolution } from './complete/recovered.ts';
 export type { FibreAtStart } from './complete/pencil-ends.ts';
 export type { PencilHyperplane } from './complete/trace-pencil.ts';
+export { discoverByMonodromy, type MonodromyOptions, type MonodromyResult } from './monodromy/discover.ts';
+export { createInProcessLegTracker } from './parameter/in-process-tracker.ts';
+export type { ParameterLeg } from './parameter/gamma-arc.ts';
