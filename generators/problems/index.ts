@@ -15,6 +15,9 @@ import conicsThrough1PointTangentTo4Conics from './conics/conics-through-1-point
 import conicsTangentTo5Conics from './conics/conics-tangent-to-5-conics.ts';
 import linesOnACubicSurface from './surfaces/lines-on-a-cubic-surface.ts';
 import linesMeetingFourLines from './schubert/lines-meeting-four-lines.ts';
+import linesMeetingSixPlanesIn4Space from './schubert/lines-meeting-six-planes-in-4-space.ts';
+import linesMeetingEight3PlanesIn5Space from './schubert/lines-meeting-eight-3-planes-in-5-space.ts';
+import planesMeetingNinePlanesIn5Space from './schubert/planes-meeting-nine-planes-in-5-space.ts';
 import flexesOfAPlaneCubic from './plane-curves/flexes-of-a-plane-cubic.ts';
 import bitangentsOfAPlaneQuartic from './plane-curves/bitangents-of-a-plane-quartic.ts';
 import flexesOfAPlaneQuartic from './plane-curves/flexes-of-a-plane-quartic.ts';
@@ -32,6 +35,7 @@ import euclideanDistanceDegreeOfAPlaneQuartic from './distance-and-optimisation/
 import euclideanDistanceDegreeOfAQuadricSurface from './distance-and-optimisation/euclidean-distance-degree-of-a-quadric-surface.ts';
 import eigenvectorsOfASymmetricTernaryCubic from './distance-and-optimisation/eigenvectors-of-a-symmetric-ternary-cubic.ts';
 import eigenvectorsOfASymmetricTernaryQuartic from './distance-and-optimisation/eigenvectors-of-a-symmetric-ternary-quartic.ts';
+import rationalCubicsThrough8Points from './rational-curves/rational-cubics-through-8-points.ts';
 
 /** Every problem of the atlas, in the order the home page lists them. Slugs are permanent. */
 export const problems: readonly ProblemDefinition[] = [
@@ -51,6 +55,9 @@ export const problems: readonly ProblemDefinition[] = [
   conicsTangentTo5Conics,
   linesOnACubicSurface,
   linesMeetingFourLines,
+  linesMeetingSixPlanesIn4Space,
+  linesMeetingEight3PlanesIn5Space,
+  planesMeetingNinePlanesIn5Space,
   flexesOfAPlaneCubic,
   bitangentsOfAPlaneQuartic,
   flexesOfAPlaneQuartic,
@@ -68,4 +75,5 @@ export const problems: readonly ProblemDefinition[] = [
   euclideanDistanceDegreeOfAQuadricSurface,
   eigenvectorsOfASymmetricTernaryCubic,
   eigenvectorsOfASymmetricTernaryQuartic,
+  rationalCubicsThrough8Points,
 ];
