@@ -17,6 +17,7 @@ import linesOnACubicSurface from './surfaces/lines-on-a-cubic-surface.ts';
 import linesMeetingFourLines from './schubert/lines-meeting-four-lines.ts';
 import flexesOfAPlaneCubic from './plane-curves/flexes-of-a-plane-cubic.ts';
 import bitangentsOfAPlaneQuartic from './plane-curves/bitangents-of-a-plane-quartic.ts';
+import forwardKinematicsOfAPlanar3RprRobot from './mechanisms/forward-kinematics-of-a-planar-3-rpr-robot.ts';
 
 /** Every problem of the atlas, in the order the home page lists them. Slugs are permanent. */
 export const problems: readonly ProblemDefinition[] = [
@@ -38,4 +39,5 @@ export const problems: readonly ProblemDefinition[] = [
   linesMeetingFourLines,
   flexesOfAPlaneCubic,
   bitangentsOfAPlaneQuartic,
+  forwardKinematicsOfAPlanar3RprRobot,
 ];
