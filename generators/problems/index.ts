@@ -18,6 +18,7 @@ import linesMeetingFourLines from './schubert/lines-meeting-four-lines.ts';
 import flexesOfAPlaneCubic from './plane-curves/flexes-of-a-plane-cubic.ts';
 import bitangentsOfAPlaneQuartic from './plane-curves/bitangents-of-a-plane-quartic.ts';
 import forwardKinematicsOfAPlanar3RprRobot from './mechanisms/forward-kinematics-of-a-planar-3-rpr-robot.ts';
+import perspectiveThreePointPose from './mechanisms/perspective-three-point-pose.ts';
 
 /** Every problem of the atlas, in the order the home page lists them. Slugs are permanent. */
 export const problems: readonly ProblemDefinition[] = [
@@ -40,4 +41,5 @@ export const problems: readonly ProblemDefinition[] = [
   flexesOfAPlaneCubic,
   bitangentsOfAPlaneQuartic,
   forwardKinematicsOfAPlanar3RprRobot,
+  perspectiveThreePointPose,
 ];

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import definition, { placedJoints } from '../../../../generators/problems/mechanisms/forward-kinematics-of-a-planar-3-rpr-robot.ts';
+import { signChangesAlong } from '../shared/sign-changes.ts';
 import { drawnRealSolutions, demoInstance, randomInstance, seeds, solveInstance, worstResidual } from '../shared/solve.ts';
 
 const demo = demoInstance(definition, 'positioning-table');
@@ -26,16 +27,7 @@ function realModesByScan(steps = 200000): number {
     const b3 = placedJoints([x, y, c, s], p)[2]!;
     return (b3[0] - anchors[2][0]) ** 2 + (b3[1] - anchors[2][1]) ** 2 - lengths[2]! ** 2;
   };
-  let changes = 0;
-  for (const branch of [1, -1]) {
-    let previous: number | null = null;
-    for (let k = 0; k <= steps; k++) {
-      const value = branchError((2 * Math.PI * k) / steps, branch);
-      if (value !== null && previous !== null && Math.sign(value) !== Math.sign(previous)) changes++;
-      previous = value;
-    }
-  }
-  return changes;
+  return [1, -1].reduce((sum, branch) => sum + signChangesAlong((theta) => branchError(theta, branch), 0, 2 * Math.PI, steps), 0);
 }
 
 describe('planar 3-RPR robot: the formulation', () => {
