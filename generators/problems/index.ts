@@ -19,6 +19,7 @@ import flexesOfAPlaneCubic from './plane-curves/flexes-of-a-plane-cubic.ts';
 import bitangentsOfAPlaneQuartic from './plane-curves/bitangents-of-a-plane-quartic.ts';
 import forwardKinematicsOfAPlanar3RprRobot from './mechanisms/forward-kinematics-of-a-planar-3-rpr-robot.ts';
 import perspectiveThreePointPose from './mechanisms/perspective-three-point-pose.ts';
+import forwardKinematicsOfAStewartGoughPlatform from './mechanisms/forward-kinematics-of-a-stewart-gough-platform.ts';
 
 /** Every problem of the atlas, in the order the home page lists them. Slugs are permanent. */
 export const problems: readonly ProblemDefinition[] = [
@@ -42,4 +43,5 @@ export const problems: readonly ProblemDefinition[] = [
   bitangentsOfAPlaneQuartic,
   forwardKinematicsOfAPlanar3RprRobot,
   perspectiveThreePointPose,
+  forwardKinematicsOfAStewartGoughPlatform,
 ];

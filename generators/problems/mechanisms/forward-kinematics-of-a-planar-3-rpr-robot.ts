@@ -48,7 +48,7 @@ export default defineProblem({
     parameters: ['a2', 'a3x', 'a3y', 'b2', 'b3x', 'b3y', 'r1', 'r2', 'r3'],
     groups: [['x', 'y'], ['c', 's']],
     equations: (u, p, ops) => {
-      type Node = typeof u.x;
+      type Node = NonNullable<typeof u.x>;
       const zero = ops.constant(0);
       // Strut i minus strut 1, with c² + s² replaced by 1 (the fourth equation), written out so that its
       // bidegree in {x, y} and {c, s} is visibly (1, 1):
