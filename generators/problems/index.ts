@@ -20,6 +20,7 @@ import bitangentsOfAPlaneQuartic from './plane-curves/bitangents-of-a-plane-quar
 import forwardKinematicsOfAPlanar3RprRobot from './mechanisms/forward-kinematics-of-a-planar-3-rpr-robot.ts';
 import perspectiveThreePointPose from './mechanisms/perspective-three-point-pose.ts';
 import forwardKinematicsOfAStewartGoughPlatform from './mechanisms/forward-kinematics-of-a-stewart-gough-platform.ts';
+import relativePoseFromFivePointPairs from './mechanisms/relative-pose-from-five-point-pairs.ts';
 
 /** Every problem of the atlas, in the order the home page lists them. Slugs are permanent. */
 export const problems: readonly ProblemDefinition[] = [
@@ -44,4 +45,5 @@ export const problems: readonly ProblemDefinition[] = [
   forwardKinematicsOfAPlanar3RprRobot,
   perspectiveThreePointPose,
   forwardKinematicsOfAStewartGoughPlatform,
+  relativePoseFromFivePointPairs,
 ];

@@ -3,37 +3,35 @@ import type { FigureItem } from '../../../src/atlas/figure.ts';
 import { fitWindow } from '../shared/fit-window.ts';
 import { genericInstance } from '../shared/generic-instance.ts';
 import { ENGINEERING_CAUTION } from '../shared/engineering-caution.ts';
+import { dot3 as dot, type Vector3 } from './vector3.ts';
 
 const markers = [1, 2, 3] as const;
-type Vector = [number, number, number];
 
 /** The ray (xᵢ, yᵢ, 1) through marker i's image point, in the camera frame (z along the optical axis). */
-function ray(p: Readonly<Record<string, number>>, i: number): Vector {
+function ray(p: Readonly<Record<string, number>>, i: number): Vector3 {
   return [p[`x${i}`]!, p[`y${i}`]!, 1];
 }
-
-const dot = (a: Vector, b: Vector): number => a[0] * b[0] + a[1] * b[1] + a[2] * b[2];
 
 /**
  * The three markers in the camera frame for depth ratios (u, v) = (λ₂/λ₁, λ₃/λ₁): λ₁ is fixed by the known distance
  * between markers 1 and 2, taking λ₁ > 0 (the positive square root), and marker i sits at λᵢ(xᵢ, yᵢ, 1).
  */
-export function markersInCameraFrame([u, v]: readonly number[], p: Readonly<Record<string, number>>): Vector[] {
-  const [r1, r2, r3] = markers.map((i) => ray(p, i)) as [Vector, Vector, Vector];
-  const gap = [r1[0] - u! * r2[0], r1[1] - u! * r2[1], r1[2] - u! * r2[2]] as Vector;
+export function markersInCameraFrame([u, v]: readonly number[], p: Readonly<Record<string, number>>): Vector3[] {
+  const [r1, r2, r3] = markers.map((i) => ray(p, i)) as [Vector3, Vector3, Vector3];
+  const gap = [r1[0] - u! * r2[0], r1[1] - u! * r2[1], r1[2] - u! * r2[2]] as Vector3;
   const depth1 = Math.sqrt(p.d12! / dot(gap, gap));
-  return [1, u!, v!].map((ratio, k) => [r1, r2, r3][k]!.map((c) => depth1 * ratio * c) as Vector);
+  return [1, u!, v!].map((ratio, k) => [r1, r2, r3][k]!.map((c) => depth1 * ratio * c) as Vector3);
 }
 
 /** Top view: the camera frame's (x, z)-plane, seen along the camera's y-axis. */
-const topView = (v: Vector): [number, number] => [v[0], v[2]];
+const topView = (v: Vector3): [number, number] => [v[0], v[2]];
 
 function cameraAndRays(p: Readonly<Record<string, number>>): FigureItem[] {
   // Rays are drawn far beyond any marker; the figure clips them to the window.
   const reach = 50 * Math.sqrt(Math.max(p.d12!, p.d13!, p.d23!));
   return [
     { shape: 'point', x: 0, y: 0, layer: 'given', label: 'camera' },
-    ...markers.map((i): FigureItem => ({ shape: 'polyline', points: [[0, 0], topView(ray(p, i).map((c) => reach * c) as Vector)], closed: false, layer: 'rays', label: `ray to marker ${i}` })),
+    ...markers.map((i): FigureItem => ({ shape: 'polyline', points: [[0, 0], topView(ray(p, i).map((c) => reach * c) as Vector3)], closed: false, layer: 'rays', label: `ray to marker ${i}` })),
   ];
 }
 

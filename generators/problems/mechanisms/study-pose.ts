@@ -1,5 +1,6 @@
-/** A point or vector of space. */
-export type Vector3 = [number, number, number];
+import type { Vector3 } from './vector3.ts';
+
+export type { Vector3 };
 
 /**
  * The platform pose of Study parameters (e₀, e, g₀, g) with e₀ = 1 (the chart the Stewart–Gough page solves in),
