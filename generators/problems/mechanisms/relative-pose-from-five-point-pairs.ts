@@ -107,7 +107,7 @@ export default defineProblem({
     'These points satisfy all five equations for any data, a surface that is no rotation at all; the rest go to infinity.',
     'In our runs about $100$ paths end on the surface (each checked to have $1 + s \\cdot s = 0$) and about $120$ at infinity ($104$ and $119$ at the generic instance below; the split shifts by a path or so between instances), and none is lost.',
     'The two-homogeneous start tracks $80$ paths, and its $60$ surplus paths all end on the same surface.',
-    'The $20$ relative poses themselves are $10$ essential matrices counted twice: $R$ and its twist about the baseline give the same $E$ up to sign, and at most one of the two puts the scene in front of both cameras.',
+    'The $20$ relative poses themselves are $10$ essential matrices counted twice: $R$ and its twist about the baseline give the same $E$ up to sign, and of the two, each taken with either sign of the baseline, at most one puts all five points in front of both cameras.',
   ].join(' '),
   caution: ENGINEERING_CAUTION,
   instances: [
