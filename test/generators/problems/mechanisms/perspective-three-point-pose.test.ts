@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import definition, { markersInCameraFrame } from '../../../../generators/problems/mechanisms/perspective-three-point-pose.ts';
-import * as ops from '../../../../src/engine/expr/build.ts';
-import { solveSystem } from '../../../../src/engine/solve/solve-system.ts';
-import { createRandom } from '../../../../src/engine/random.ts';
+import type { ProblemDefinition } from '../../../../src/atlas/definition.ts';
+import { systemOf } from '../../../../src/atlas/system-of.ts';
+import { createRandom, solveSystem } from '../../../../src/engine/index.ts';
 import { signChangesAlong } from '../shared/sign-changes.ts';
 import { drawnRealSolutions, demoInstance, randomInstance, seeds, solveInstance, worstResidual } from '../shared/solve.ts';
 
@@ -31,15 +31,21 @@ function posesInFrontByScan(steps = 100000, uMax = 40): number {
 }
 
 /** The naive depth system: λᵢ²qᵢᵢ − 2λᵢλⱼqᵢⱼ + λⱼ²qⱼⱼ = dᵢⱼ for the three pairs, with q from the image points. */
-function depthSystem() {
-  const names = ['l1', 'l2', 'l3'];
-  const l = names.map((n, i) => ops.unknown(n, i));
-  const parameters = ['x1', 'y1', 'x2', 'y2', 'x3', 'y3', 'd12', 'd13', 'd23'];
-  const P = Object.fromEntries(parameters.map((n, j) => [n, ops.param(n, j)]));
-  const qq = (i: number, j: number) => ops.add(ops.mul(P[`x${i}`]!, P[`x${j}`]!), ops.mul(P[`y${i}`]!, P[`y${j}`]!), 1);
-  const pair = (i: number, j: number) => ops.sub(ops.add(ops.mul(ops.pow(l[i - 1]!, 2), qq(i, i)), ops.mul(-2, l[i - 1]!, l[j - 1]!, qq(i, j)), ops.mul(ops.pow(l[j - 1]!, 2), qq(j, j))), P[`d${i}${j}`]!);
-  return { unknowns: names, parameters, equations: [pair(1, 2), pair(1, 3), pair(2, 3)] };
-}
+const depthDefinition: ProblemDefinition = {
+  ...definition,
+  slug: 'perspective-three-point-depths',
+  formulation: {
+    unknowns: ['l1', 'l2', 'l3'],
+    parameters: definition.formulation.parameters,
+    description: 'The depths of the three markers along their rays.',
+    equations: (u, P, ops) => {
+      const l = [u.l1!, u.l2!, u.l3!];
+      const qq = (i: number, j: number) => ops.add(ops.mul(P[`x${i}`]!, P[`x${j}`]!), ops.mul(P[`y${i}`]!, P[`y${j}`]!), 1);
+      const pair = (i: number, j: number) => ops.sub(ops.add(ops.mul(ops.pow(l[i - 1]!, 2), qq(i, i)), ops.mul(-2, l[i - 1]!, l[j - 1]!, qq(i, j)), ops.mul(ops.pow(l[j - 1]!, 2), qq(j, j))), P[`d${i}${j}`]!);
+      return [pair(1, 2), pair(1, 3), pair(2, 3)];
+    },
+  },
+};
 
 describe('perspective-three-point: the formulation', () => {
   it('the scan finds four poses in front of the camera for the demo view', () => {
@@ -57,7 +63,7 @@ describe('perspective-three-point: the formulation', () => {
     const random = createRandom(seed);
     const parameters = new Float64Array(18);
     for (let j = 0; j < 9; j++) random.gaussianComplex(parameters, 2 * j);
-    const report = await solveSystem(depthSystem(), parameters, { seed, start: 'total-degree' });
+    const report = await solveSystem(systemOf(depthDefinition), parameters, { seed, start: 'total-degree' });
     expect(report.solutions).toHaveLength(8);
     const points = report.solutions.map((s) => s.point);
     for (const x of points) {
