@@ -36,6 +36,10 @@ import euclideanDistanceDegreeOfAQuadricSurface from './distance-and-optimisatio
 import eigenvectorsOfASymmetricTernaryCubic from './distance-and-optimisation/eigenvectors-of-a-symmetric-ternary-cubic.ts';
 import eigenvectorsOfASymmetricTernaryQuartic from './distance-and-optimisation/eigenvectors-of-a-symmetric-ternary-quartic.ts';
 import rationalCubicsThrough8Points from './rational-curves/rational-cubics-through-8-points.ts';
+import forwardKinematicsOfAPlanar3RprRobot from './mechanisms/forward-kinematics-of-a-planar-3-rpr-robot.ts';
+import perspectiveThreePointPose from './mechanisms/perspective-three-point-pose.ts';
+import forwardKinematicsOfAStewartGoughPlatform from './mechanisms/forward-kinematics-of-a-stewart-gough-platform.ts';
+import relativePoseFromFivePointPairs from './mechanisms/relative-pose-from-five-point-pairs.ts';
 
 /** Every problem of the atlas, in the order the home page lists them. Slugs are permanent. */
 export const problems: readonly ProblemDefinition[] = [
@@ -76,4 +80,8 @@ export const problems: readonly ProblemDefinition[] = [
   eigenvectorsOfASymmetricTernaryCubic,
   eigenvectorsOfASymmetricTernaryQuartic,
   rationalCubicsThrough8Points,
+  forwardKinematicsOfAPlanar3RprRobot,
+  perspectiveThreePointPose,
+  forwardKinematicsOfAStewartGoughPlatform,
+  relativePoseFromFivePointPairs,
 ];
