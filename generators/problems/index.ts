@@ -27,6 +27,7 @@ import singularQuartics from './plane-curves/singular-members-of-a-pencil-of-qua
 import singularQuintics from './plane-curves/singular-members-of-a-pencil-of-quintics.ts';
 import tangentLinesFromAPointToAQuartic from './plane-curves/tangent-lines-from-a-point-to-a-quartic.ts';
 import commonTangentLinesOfTwoConics from './plane-curves/common-tangent-lines-of-two-conics.ts';
+import commonTangentLinesOfTwoCubics from './plane-curves/common-tangent-lines-of-two-cubics.ts';
 import pointsCommonToThreeQuadricSurfaces from './intersections/points-common-to-three-quadric-surfaces.ts';
 import pointsCommonToThreeCubicSurfaces from './intersections/points-common-to-three-cubic-surfaces.ts';
 import euclideanDistanceDegreeOfAnEllipse from './distance-and-optimisation/euclidean-distance-degree-of-an-ellipse.ts';
@@ -71,6 +72,7 @@ export const problems: readonly ProblemDefinition[] = [
   singularQuintics,
   tangentLinesFromAPointToAQuartic,
   commonTangentLinesOfTwoConics,
+  commonTangentLinesOfTwoCubics,
   pointsCommonToThreeQuadricSurfaces,
   pointsCommonToThreeCubicSurfaces,
   euclideanDistanceDegreeOfAnEllipse,
