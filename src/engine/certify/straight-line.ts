@@ -1,71 +1,45 @@
-import type { ExprNode, PolynomialSystem } from '../expr/node.ts';
-import { createProgramBuilder } from './program-builder.ts';
-import { differentiate } from './reverse-mode.ts';
-import type { Instruction, SlotRef } from './slot-instruction.ts';
+import type { PolynomialSystem } from '../expr/node.ts';
+import { createTape } from '../compile/tape.ts';
+import { lowerExpression } from '../compile/lower.ts';
+import { gradient } from '../compile/differentiate.ts';
+import { slotsOfTape, type SlotCode } from './slots-of-tape.ts';
 
 export type { Instruction, SlotRef } from './slot-instruction.ts';
 
 /**
- * A system lowered to straight-line code: forward instructions give the equation values, backward ones
- * (reverse-mode differentiation, one sweep per equation) give the Jacobian in the unknowns. Leaves that are
- * exact doubles (constants, parameters) sit in "point" slots filled before a run. Common subexpressions are
- * shared (structural hashing), products by ±1 and sums with 0 are folded, signs ride on references.
+ * A system lowered to straight-line code for certification: the engine's one program form (the tape of
+ * compile/tape.ts, with its symbolic reverse-mode Jacobian from compile/differentiate.ts) in slot form. Forward
+ * instructions give the equation values, backward ones the Jacobian in the unknowns; leaves that are exact doubles
+ * (constants, parameters) sit in point slots filled before a run. Constants are folded only where the result is
+ * exact, so interval and exact evaluations of this code enclose the true values.
  */
-export interface StraightLineProgram {
+export interface StraightLineProgram extends SlotCode {
   readonly unknownCount: number;
-  readonly slotCount: number;
-  readonly isPoint: readonly boolean[];
-  readonly constants: readonly { slot: number; re: number; im: number }[];
-  readonly parameters: readonly { slot: number; index: number }[];
-  readonly forward: readonly Instruction[];
-  readonly backward: readonly Instruction[];
-  readonly values: readonly SlotRef[];
-  /** Row-major n×n: jacobian[i·n + j] = ∂f_i/∂x_j. */
-  readonly jacobian: readonly SlotRef[];
-  /** True when every constant is real (then real parameters give a system with real coefficients). */
-  readonly realConstants: boolean;
 }
 
-/** Lowers a square polynomial system to a straight-line program; throws (naming the sizes) when it is not square. */
+/** Lowers a square polynomial system to a straight-line program; throws (naming the sizes or the equation) when it is not square or an index is out of range. */
 export function lowerSystem(system: PolynomialSystem): StraightLineProgram {
-  const n = system.unknowns.length;
+  const n = system.unknowns.length, np = system.parameters.length;
   if (system.equations.length !== n) {
     throw new RangeError(`certification needs a square system: ${system.equations.length} equations in ${n} unknowns`);
   }
-  const forward: Instruction[] = [];
-  const backward: Instruction[] = [];
-  const builder = createProgramBuilder(forward);
-  let realConstants = true;
-  const memo = new Map<ExprNode, SlotRef>();
-  const lower = (node: ExprNode): SlotRef => {
-    const cached = memo.get(node);
-    if (cached !== undefined) return cached;
-    let ref: SlotRef;
-    switch (node.kind) {
-      case 'const':
-        if (node.im !== 0) realConstants = false;
-        ref = builder.constant(node.re, node.im);
-        break;
-      case 'param': ref = builder.parameter(node.index); break;
-      case 'unknown':
-        if (!(node.index >= 0 && node.index < n)) throw new RangeError(`unknown ${node.name} has index ${node.index}, outside 0…${n - 1}`);
-        ref = builder.load(node.index);
-        break;
-      case 'add': ref = builder.sum(node.terms.map(lower)); break;
-      case 'neg': {
-        const r = lower(node.arg);
-        ref = r === null ? null : { slot: r.slot, neg: !r.neg };
-        break;
-      }
-      case 'mul': ref = node.factors.map(lower).reduce<SlotRef>((acc, f) => builder.product(acc, f), builder.one()); break;
-      case 'pow': ref = builder.power(lower(node.base), node.exponent); break;
-    }
-    memo.set(node, ref);
-    return ref;
+  const tape = createTape({ exactFolding: true });
+  const memo = new Map();
+  let where = 0;
+  const leaves = {
+    unknown: (i: number): number => {
+      if (!(Number.isInteger(i) && i >= 0 && i < n)) throw new RangeError(`equation ${where}: unknown index ${i} is outside 0…${n - 1}`);
+      return tape.unknown(i);
+    },
+    parameter: (i: number): number => {
+      if (!(Number.isInteger(i) && i >= 0 && i < np)) throw new RangeError(`equation ${where}: parameter index ${i} is outside 0…${np - 1}`);
+      return tape.parameter(i);
+    },
   };
-  const values = system.equations.map(lower);
-  builder.code = backward;
-  const jacobian = differentiate(builder, forward, values, n);
-  const { isPoint, constants, parameters } = builder;
-  return { unknownCount: n, slotCount: isPoint.length, isPoint, constants, parameters, forward, backward, values, jacobian, realConstants };
+  const values = system.equations.map((e, i) => {
+    where = i;
+    return lowerExpression(tape, e, leaves, memo);
+  });
+  const jacobian = values.flatMap((root) => gradient(tape, root, n, 0).dx);
+  return { unknownCount: n, ...slotsOfTape(tape.instructions, values, jacobian) };
 }

@@ -1,9 +1,13 @@
+import { isExactComplexProduct, isExactSum } from './exact-fold.ts';
+
 /**
  * A straight-line program over complex numbers in static single assignment form: every instruction is a
  * constant, an unknown x_j, a parameter p_k, or a binary/unary operation on earlier instructions, so ids are
  * already in evaluation order. Identical instructions are hash-consed (one id), constants are folded with
  * the usual complex arithmetic, and the identities 0 + a = a, 0·a = 0, 1·a = a, −1·a = −a, −(−a) = a hold.
- * This is the common-subexpression elimination of the compiler: equal subtrees get equal ids.
+ * This is the common-subexpression elimination of the compiler: equal subtrees get equal ids. With
+ * `exactFolding`, constants are folded only where the result is exact (Dekker's error terms are zero), so an
+ * interval evaluation of the tape encloses the true value (certification); otherwise the operation stays.
  */
 export type TapeOp = 'const' | 'x' | 'p' | 'add' | 'sub' | 'mul' | 'neg';
 
@@ -28,8 +32,14 @@ export interface TapeBuilder {
   neg(a: number): number;
 }
 
-/** Creates an empty tape builder. */
-export function createTape(): TapeBuilder {
+/** Options of a tape: `exactFolding` keeps constant operations whose folded result would be rounded. */
+export interface TapeOptions {
+  readonly exactFolding?: boolean;
+}
+
+/** Creates an empty tape builder (constant folding in floating point unless `exactFolding`). */
+export function createTape(options: TapeOptions = {}): TapeBuilder {
+  const exact = options.exactFolding === true;
   const instructions: TapeInstruction[] = [];
   const index = new Map<string, number>();
   const push = (key: string, ins: TapeInstruction): number => {
@@ -57,7 +67,9 @@ export function createTape(): TapeBuilder {
   };
   const add = (a: number, b: number): number => {
     const ia = at(a), ib = at(b);
-    if (ia.op === 'const' && ib.op === 'const') return constant(ia.re + ib.re, ia.im + ib.im);
+    if (ia.op === 'const' && ib.op === 'const' && (!exact || (isExactSum(ia.re, ib.re) && isExactSum(ia.im, ib.im)))) {
+      return constant(ia.re + ib.re, ia.im + ib.im);
+    }
     if (isConst(a, 0, 0)) return b;
     if (isConst(b, 0, 0)) return a;
     if (ib.op === 'neg') return sub(a, ib.a);
@@ -67,7 +79,9 @@ export function createTape(): TapeBuilder {
   };
   const sub = (a: number, b: number): number => {
     const ia = at(a), ib = at(b);
-    if (ia.op === 'const' && ib.op === 'const') return constant(ia.re - ib.re, ia.im - ib.im);
+    if (ia.op === 'const' && ib.op === 'const' && (!exact || (isExactSum(ia.re, -ib.re) && isExactSum(ia.im, -ib.im)))) {
+      return constant(ia.re - ib.re, ia.im - ib.im);
+    }
     if (a === b) return constant(0, 0);
     if (isConst(b, 0, 0)) return a;
     if (isConst(a, 0, 0)) return neg(b);
@@ -76,7 +90,7 @@ export function createTape(): TapeBuilder {
   };
   const mul = (a: number, b: number): number => {
     const ia = at(a), ib = at(b);
-    if (ia.op === 'const' && ib.op === 'const') {
+    if (ia.op === 'const' && ib.op === 'const' && (!exact || isExactComplexProduct(ia.re, ia.im, ib.re, ib.im))) {
       return constant(ia.re * ib.re - ia.im * ib.im, ia.re * ib.im + ia.im * ib.re);
     }
     if (isConst(a, 0, 0) || isConst(b, 0, 0)) return constant(0, 0);
