@@ -16,6 +16,7 @@ export function buildRecord(loaded: LoadedDefinition, engineVersion: string, ins
     statement: d.statement,
     excessNote: d.excessNote,
     caution: d.caution ?? null,
+    ...(d.publishedGroup ? { publishedGroup: { ...d.publishedGroup } } : {}),
     trueCount: d.trueCount.value,
     source: d.trueCount.source,
     ...(d.ladders ? { ladders: d.ladders.map((l) => ({ ...l })) } : {}),

@@ -1,6 +1,6 @@
 import type { PathEnd, PolynomialSystem } from '../../src/engine/index.ts';
 import type { ProblemDefinition } from '../../src/atlas/definition.ts';
-import type { Completeness, RetrackStats } from '../../src/atlas/record.ts';
+import type { Completeness, MonodromyGroup, RetrackStats } from '../../src/atlas/record.ts';
 
 /** One distinct solution the engine reports (H1's FoundSolution): packed complex point in the unknowns. */
 export interface EngineSolution {
@@ -100,6 +100,11 @@ export interface EngineServices {
    * solutions; absent in engines without them (the record then carries no completeness block).
    */
   readonly complete?: (system: PolynomialSystem, parameters: Float64Array, points: readonly Float64Array[], options: { seed: number; workers?: number }) => Promise<CompletenessReport>;
+  /**
+   * Optional: the monodromy group of a generic instance's distinct nonsingular solutions by random loops (seeded);
+   * absent in engines without it (the record then carries no group).
+   */
+  readonly group?: (system: PolynomialSystem, parameters: Float64Array, points: readonly Float64Array[], options: { seed: number }) => Promise<MonodromyGroup>;
   /** Ends any worker threads the engine started (the CLI calls it once a command is done); absent when there are none. */
   readonly close?: () => Promise<void>;
 }

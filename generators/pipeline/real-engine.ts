@@ -39,10 +39,12 @@ export async function loadEngine(): Promise<EngineServices> {
     },
   };
   const { completenessChecks } = await import('./completeness-checks.ts');
+  const { monodromyGroupOf } = await import('./monodromy-group-of.ts');
   return {
     version: ENGINE_VERSION,
     strategies,
     complete: (system, parameters, points, { seed }) => completenessChecks(engineSurface, system, parameters, points, seed),
+    group: (system, parameters, points, { seed }) => monodromyGroupOf(engineSurface, system, parameters, points, seed),
     certify: (system, parameters, points, { workers, ...options }) =>
       workers ? certifySolutionsParallel(system, parameters, points, { ...options, workers }) : certifySolutions(system, parameters, points, options),
     collect: (system, parameters, ends, bounds, seed) => finishSolve(system, parameters, ends, { ...bounds }, seed),

@@ -1,4 +1,5 @@
 import { z } from 'astro/zod';
+import { publishedGroupSchema } from './published-group.ts';
 import { countSourceSchema } from './source.ts';
 import { ladderMembershipSchema } from './ladder-membership.ts';
 import { SLUG_PATTERN, describeValue } from './slug.ts';
@@ -40,6 +41,7 @@ export const definitionSchema = z.object({
   trueCount: z.object({ value: z.number().int().nonnegative().nullable(), source: countSourceSchema }),
   excessNote: text,
   caution: text.optional(),
+  publishedGroup: publishedGroupSchema.optional(),
   instances: z
     .array(
       z.object({

@@ -1,5 +1,6 @@
 import type { ExprNode, exprBuilders as ExprOps, ParameterProblem, PolynomialSystem } from '../engine/index.ts';
 import type { CountSource } from './source.ts';
+import type { PublishedGroup } from './published-group.ts';
 import type { FigureItem } from './figure.ts';
 import type { LadderMembership } from './ladder-membership.ts';
 
@@ -92,6 +93,8 @@ export interface ProblemDefinition {
   readonly excessNote: string;
   /** A caution shown prominently (for example on kinematics pages), or omitted. */
   readonly caution?: string;
+  /** The published monodromy (Galois) group of the solutions, shown beside the one random loops generate, or omitted. */
+  readonly publishedGroup?: PublishedGroup;
   readonly instances: readonly InstanceDefinition[];
   /** Defaults to total degree. */
   readonly solver?: SolverChoice;

@@ -1,4 +1,5 @@
 import { z } from 'astro/zod';
+import { publishedGroupSchema } from './published-group.ts';
 import { countSourceSchema } from './source.ts';
 import { figureSchema } from './figure.ts';
 import { ladderMembershipSchema } from './ladder-membership.ts';
@@ -103,6 +104,27 @@ export const traceCheckSchema = z.object({
 /** The completeness checks of one instance that need no published count. */
 export const completenessSchema = z.object({ recovery: recoveryCheckSchema, trace: traceCheckSchema });
 
+/**
+ * The monodromy group of a generic instance's solution set as random loops saw it: the permutations of the loops that
+ * closed generate a subgroup of the monodromy group, so `order` is a lower bound and a 'symmetric' verdict a proof
+ * (Jordan's theorem or the exact order by Schreier–Sims); cycle types are the most frequent ones seen.
+ */
+export const monodromyGroupSchema = z.object({
+  seed: z.number().int().nonnegative(),
+  loops: z.number().int().nonnegative(),
+  closedLoops: z.number().int().nonnegative(),
+  degree: z.number().int().positive(),
+  /** Exact order of the generated group (decimal digits), null above the exact-order limit. */
+  order: z.string().regex(/^[0-9]+$/).nullable(),
+  verdict: z.enum(['symmetric', 'alternating', 'intransitive', 'order', 'undecided']),
+  transitive: z.boolean(),
+  primitive: z.boolean(),
+  /** The largest prime p such that some loop has a power that is a p-cycle (Jordan's witness), or null. */
+  primeCycle: z.number().int().positive().nullable(),
+  oddLoop: z.boolean(),
+  cycleTypes: z.array(z.object({ type: z.string().min(1), count: z.number().int().positive() })),
+});
+
 /** The solve of one instance of a problem. */
 export const instanceResultSchema = z.object({
   id: z.string().regex(/^[a-z0-9-]+$/),
@@ -120,6 +142,8 @@ export const instanceResultSchema = z.object({
   notes: z.array(z.string()),
   /** Completeness checks without a published count (absent in records written before they existed). */
   completeness: completenessSchema.optional(),
+  /** The monodromy group seen by random loops (generic instances with few enough solutions; absent otherwise). */
+  monodromyGroup: monodromyGroupSchema.optional(),
 });
 
 /** One entry of a record's history: when it was replaced, by which engine, and what changed. */
@@ -139,6 +163,8 @@ export const solveRecordSchema = z.object({
   statement: z.string().min(1),
   excessNote: z.string().min(1),
   caution: z.string().nullable(),
+  /** The published monodromy group, when the definition names one (absent otherwise). */
+  publishedGroup: publishedGroupSchema.optional(),
   trueCount: z.number().int().nonnegative().nullable(),
   source: countSourceSchema,
   /** The ladders the problem is a rung of (records before this field: absent). */
@@ -163,6 +189,7 @@ export type PathStats = z.infer<typeof pathStatsSchema>;
 export type RetrackStats = z.infer<typeof retrackStatsSchema>;
 export type Counts = z.infer<typeof countsSchema>;
 export type Completeness = z.infer<typeof completenessSchema>;
+export type MonodromyGroup = z.infer<typeof monodromyGroupSchema>;
 export type InstanceResult = z.infer<typeof instanceResultSchema>;
 export type HistoryEntry = z.infer<typeof historyEntrySchema>;
 export type SolveRecord = z.infer<typeof solveRecordSchema>;

@@ -45,3 +45,6 @@ export { certifySolutions, prepareCertifier, type CertificationReport, type Cert
 export { certifySolutionsParallel, closeCertifyWorkers } from './certify/certify-parallel.ts';
 export { finishSolve } from './solve/solve-system.ts';
 export { multiplyComplex } from './certify/complex-inverse.ts';
+// Monodromy groups (issue 12): loop permutations of a solution set and what group they generate.
+export { monodromyPermutations, type MonodromyLoopOptions, type MonodromyLoopsReport, type LoopOutcome } from './complete/monodromy-permutations.ts';
+export { describeGroup, EXACT_ORDER_LIMIT, type GroupDescription, type GroupVerdict } from './galois/describe-group.ts';

@@ -7,6 +7,7 @@ import { planeCurveItems } from '../shared/plane-curve-items.ts';
 import { genericInstance } from '../shared/generic-instance.ts';
 import { fitWindow } from '../shared/fit-window.ts';
 import { fultonCurves } from '../shared/fulton-curves.ts';
+import { factorialDigits, symmetricGroupName } from '../shared/symmetric-group.ts';
 
 /** What distinguishes one "two plane curves meet" problem from another. */
 export interface CurvePairSpec {
@@ -55,6 +56,7 @@ export function curvePairProblem(spec: CurvePairSpec): ProblemDefinition {
         note: "Bézout's theorem for plane curves. That Bézout stated it in 1779 is from memory.",
       },
     },
+    publishedGroup: { name: `${symmetricGroupName(d * d)}, the full symmetric group`, order: factorialDigits(d * d), citation: 'J. Harris, Galois groups of enumerative problems, Duke Math. J. 46 (1979) 685–724' },
     excessNote: `None: for general coefficients the two curves meet transversally in exactly $${d * d}$ finite points, so every path of the total-degree homotopy ends at a distinct solution.`,
     instances: [
       genericInstance(`Two random complex ${spec.noun}s`, spec.genericSeed, 'All coefficients'),

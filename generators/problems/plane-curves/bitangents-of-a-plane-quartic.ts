@@ -99,6 +99,7 @@ export default defineProblem({
       note: 'The book’s formula for the double tangents of a curve of degree d without singular points, ½d(d − 2)(d² − 9), gives 28 for d = 4 (p. 211, as Cayley cites it in 1849). From memory, not re-read: that the book shows a quartic with four ovals and 28 real bitangents, its publisher (Adolph Marcus), and that the real counts 28, 16, 8, 4 are Zeuthen’s (1873).',
     },
   },
+  publishedGroup: { name: 'Sp(6, 2), the symplectic group over the field of two elements', order: '1451520', citation: 'C. Jordan, Traité des substitutions et des équations algébriques, Gauthier-Villars, Paris 1870; J. Harris, Galois groups of enumerative problems, Duke Math. J. 46 (1979) 685–724' },
   excessNote: [
     'The naive counts, $1080$ (total degree) and $288$ (two-homogeneous), far exceed $28$; the surplus lies at infinity of the charts.',
     'When $q_4(m) = 0$ the line runs in an asymptotic direction of the curve, $q$ drops degree, and $q = q_4\\,(t^2 + \\alpha t + \\beta)^2$ can only be met in the limit with $\\alpha$ or $\\beta$ infinite;',

@@ -47,6 +47,7 @@ export default defineProblem({
       note: 'The flexes as the intersection with the Hessian curve; the count 3d(d − 2) for a curve of degree d was obtained by Plücker, and Hesse gave the theory in complete form in this paper (as an encyclopaedia article on curves that cites it says). Volume and pages are as one secondary citation gives them, not checked against the volume. That exactly three flexes of a real smooth cubic are real is classical (from memory).',
     },
   },
+  publishedGroup: { name: 'the affine special linear group of (Z/3)², order 9 · 24', order: '216', citation: 'J. Harris, Galois groups of enumerative problems, Duke Math. J. 46 (1979) 685–724 (the section from memory)' },
   excessNote: 'None: for a general cubic the curve and its Hessian meet transversally in $9$ points, all in the affine chart.',
   instances: [
     genericInstance('A random complex cubic', 20260107, 'All 10 coefficients'),

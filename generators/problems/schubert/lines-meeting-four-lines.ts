@@ -70,6 +70,7 @@ export default defineProblem({
       note: 'Two lines meet four general lines: Schubert’s method counts them with the four lines moved into special position, where the solutions can be seen, and keeps the number (his principle of conservation of number). The reprint (ISBN 3-540-09233-1) and the linked scan of the 1879 edition are as a reference list that cites the book gives them; the publisher of 1879, B. G. Teubner, is from memory.',
     },
   },
+  publishedGroup: { name: 'S₂, the full symmetric group', order: '2', citation: 'J. Harris, Galois groups of enumerative problems, Duke Math. J. 46 (1979) 685–724' },
   excessNote: [
     'The total-degree homotopy tracks $4$ paths; the $2$ extra ones go to infinity in the plane of $(s, t)$, to the points where $s$ or $t$ alone is infinite:',
     'each equation is $c_0 + c_1 s + c_2 t + c_3 st$, whose top-degree part $st$ vanishes at two points at infinity common to both equations.',

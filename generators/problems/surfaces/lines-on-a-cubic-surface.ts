@@ -67,6 +67,7 @@ export default defineProblem({
       note: 'The link opens p. 446 of the reprint, where the count twenty-seven is derived from Salmon’s cone of degree six and Plücker’s formula for double tangents. From memory, not re-read: the page range of 1849, that Salmon’s part is a note in the same volume, and that the real counts 27, 15, 7, 3 are Schläfli’s (1863) and all 27 real on the diagonal surface is Clebsch’s (1871).',
     },
   },
+  publishedGroup: { name: 'W(E₆), the Weyl group of E₆', order: '51840', citation: 'C. Jordan, Traité des substitutions et des équations algébriques, Gauthier-Villars, Paris 1870; J. Harris, Galois groups of enumerative problems, Duke Math. J. 46 (1979) 685–724' },
   excessNote: [
     'The $81 - 27 = 54$ surplus paths go to infinity. Homogenise the chart with a new coordinate $h$: at $h = 0$ only the cubic part $f_3$ of $f$ survives,',
     'and the four equations say that $f_3(\\lambda(a, b) + \\mu(c, d), 0)$ vanishes for all $\\lambda, \\mu$. For a general surface that forces $(a, b)$ and $(c, d)$ to be proportional to one of the three roots of the binary cubic $f_3(x, y, 0)$:',
