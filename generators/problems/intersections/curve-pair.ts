@@ -52,7 +52,7 @@ export function curvePairProblem(spec: CurvePairSpec): ProblemDefinition {
       value: d * d,
       source: {
         ...fultonCurves,
-        note: "Bézout's theorem for plane curves. That Bézout stated it in 1779 is from memory.",
+        note: "Bézout's theorem for plane curves. That Bézout published it in 1779, in his Théorie générale des équations algébriques, is as encyclopaedia accounts of the theorem give it; his text was not read.",
       },
     },
     excessNote: `None: for general coefficients the two curves meet transversally in exactly $${d * d}$ finite points, so every path of the total-degree homotopy ends at a distinct solution.`,
