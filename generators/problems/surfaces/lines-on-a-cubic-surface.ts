@@ -64,7 +64,7 @@ export default defineProblem({
       venue: 'The Cambridge and Dublin Mathematical Journal 4 (1849), 118–132; reprinted as paper 76 in his Collected Mathematical Papers, vol. 1',
       url: 'https://goobi.tib.eu/viewer/fulltext/1025197879/467',
       bib: { type: 'article', journal: 'The Cambridge and Dublin Mathematical Journal', volume: '4', pages: '118--132' },
-      note: 'The link opens p. 446 of the reprint, where the count twenty-seven is derived from Salmon’s cone of degree six and Plücker’s formula for double tangents. From memory, not re-read: the page range of 1849, that Salmon’s part is a note in the same volume, and that the real counts 27, 15, 7, 3 are Schläfli’s (1863) and all 27 real on the diagonal surface is Clebsch’s (1871).',
+      note: 'The link opens p. 446 of the reprint, where the count twenty-seven is derived from the circumscribed cone of degree six (by Salmon’s paper in vol. 2 of the same journal, p. 65) and Plücker’s formula for double tangents (his Theorie der algebraischen Curven, p. 211). Schläfli’s memoir on the species of cubic surfaces (Philosophical Transactions of the Royal Society of London 153, 1863) credits the theory of the 27 lines to Cayley and Salmon, cites Salmon’s paper on the triple tangent planes in vol. 4, pp. 252–260, and treats the reality of the lines. The page range of 1849 agrees with one secondary citation but was not seen on the reprint’s first page. From memory, not re-read: that the real counts are exactly 27, 15, 7 and 3, and that all 27 real on the diagonal surface is Clebsch’s (1871; that they are all real there is as MathWorld’s entry on the surface states).',
     },
   },
   excessNote: [
