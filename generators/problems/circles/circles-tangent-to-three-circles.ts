@@ -54,7 +54,7 @@ export default defineProblem({
       title: "Apollonius' contact problem in n-space in view of enumerative geometry",
       venue: 'Acta Mathematica Universitatis Comenianae 68(1) (1999), 37–47',
       bib: { type: 'article', journal: 'Acta Mathematica Universitatis Comenianae', volume: '68', number: '1', pages: '37--47' },
-      note: 'They count 2^(n+1) hyperspheres tangent to n + 1 general ones by Bézout in the space of coefficients (volume, issue and pages checked on the article’s first page). That the planar construction goes back to Viète’s reconstruction of the lost work of Apollonius (Apollonius Gallus, Paris, 1600) is from memory.',
+      note: 'They count 2^(n+1) hyperspheres tangent to n + 1 general ones by Bézout in the space of coefficients (volume, issue and pages checked on the article’s first page). That the planar construction goes back to Viète’s restoration of Apollonius’s lost book on tangencies (Apollonius Gallus, Paris, 1600) is as historical accounts of the problem give it; Viète’s text was not read.',
     },
   },
   excessNote: [

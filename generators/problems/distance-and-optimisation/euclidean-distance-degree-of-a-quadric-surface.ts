@@ -66,7 +66,7 @@ export default defineProblem({
     value: 6,
     source: {
       ...euclideanDistanceDegreePaper,
-      note: 'A general quadric hypersurface in n-space has Euclidean distance degree 2n, 6 for a surface in 3-space (the case d = 2 of the paper’s formula d·((d − 1)ⁿ − 1)/(d − 2), read as its limit 2n). Section and page from memory.',
+      note: 'A general quadric hypersurface in n-space has Euclidean distance degree 2n, 6 for a surface in 3-space (the case d = 2 of the paper’s formula d·((d − 1)ⁿ − 1)/(d − 2), read as its limit 2n). Volume, issue, pages and DOI as the publisher’s page for the article gives them; the proposition and page that state the formula were not re-read.',
     },
   },
   excessNote: 'The total-degree count $16$ exceeds $6$ by $10$, all at infinity. Homogenise with $(x : y : z : \\lambda : w)$ and write $f = Q + L + k$ with $Q$ quadratic of matrix $A$: on the hyperplane $w = 0$ the top-degree terms are $-2\\lambda A (x, y, z)^{\\mathsf T}$ and $Q(x, y, z)$, which vanish on the conic $\\lambda = Q = 0$ and at the point where only $\\lambda$ is nonzero. The surplus paths end there (in our total-degree run on the generic instance: $10$ at infinity, none failed). Keeping $\\lambda$ in a group of its own removes the surplus: the two-homogeneous start has exactly $6$ paths. For special quadrics the count drops: a sphere has Euclidean distance degree $2$, the nearest and the farthest point.',

@@ -53,7 +53,7 @@ export function curvePairProblem(spec: CurvePairSpec): ProblemDefinition {
       value: d * d,
       source: {
         ...fultonCurves,
-        note: "Bézout's theorem for plane curves. That Bézout stated it in 1779 is from memory.",
+        note: "Bézout's theorem for plane curves. That Bézout published it in 1779, in his Théorie générale des équations algébriques, is as encyclopaedia accounts of the theorem give it; his text was not read.",
       },
     },
     publishedGroup: { name: `${symmetricGroupName(d * d)}, the full symmetric group`, order: factorialDigits(d * d), citation: 'J. Harris, Galois groups of enumerative problems, Duke Math. J. 46 (1979) 685–724' },

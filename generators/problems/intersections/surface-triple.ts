@@ -45,7 +45,7 @@ export function surfaceTripleProblem(spec: SurfaceTripleSpec): ProblemDefinition
         title: 'Intersection Theory',
         venue: 'Springer, Ergebnisse der Mathematik und ihrer Grenzgebiete 3. Folge, Band 2 (1984)',
         bib: { type: 'book', publisher: 'Springer', address: 'Berlin' },
-        note: `Bézout's theorem in projective space: n general hypersurfaces of degrees d₁, …, dₙ in Pⁿ meet in d₁⋯dₙ points, ${d ** 3} here (the book's chapter 8 on intersections in projective space; chapter and series details from memory).`,
+        note: `Bézout's theorem in projective space: n general hypersurfaces of degrees d₁, …, dₙ in Pⁿ meet in d₁⋯dₙ points, ${d ** 3} here (the book's chapter 8, from memory; the chapter and the proposition were not re-read). The series and volume are as reference lists give them for the second edition (Springer 1998, doi 10.1007/978-1-4612-1700-8); that the first edition carries the same is from memory.`,
       },
     },
     excessNote: `None: three general ${spec.noun} surfaces meet transversally in exactly $${d ** 3}$ points, none on the plane at infinity (the top-degree parts of three general forms have no common zero there), so every path of the total-degree homotopy ends at a distinct solution. Excess appears only in special position, for instance when the three surfaces share a curve.`,

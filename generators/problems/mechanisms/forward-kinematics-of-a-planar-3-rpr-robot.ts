@@ -86,7 +86,7 @@ export default defineProblem({
       title: 'On the direct kinematics of planar parallel manipulators: special architectures and number of solutions',
       venue: 'Mechanism and Machine Theory 29(8) (1994), 1083–1097',
       bib: { type: 'article', journal: 'Mechanism and Machine Theory', volume: '29', number: '8', pages: '1083--1097' },
-      note: 'Their abstract (read in the 1993 manuscript) states that the direct kinematic problem of the general planar three-degree-of-freedom parallel manipulator reduces to a polynomial of degree 6, found by several researchers independently, among them Gosselin, Sefrioui and Richard (Mechanism and Machine Theory, early 1990s). From memory, not re-read: the volume, issue and pages; that Hunt (1983) first showed six assembly modes; and that all six can be real.',
+      note: 'Their abstract (read in the 1993 manuscript) states that the direct kinematic problem of the general planar three-degree-of-freedom parallel manipulator reduces to a polynomial of degree 6, found by several researchers independently, among them Gosselin, Sefrioui and Richard (Mechanism and Machine Theory, early 1990s). Volume, issue and pages as a reference list that cites the article gives them; no DOI was found. That Hunt showed six assembly modes is as L. Rolland’s survey of the kinematics of parallel manipulators says (doi 10.5772/5431); from memory, not re-read: the year of Hunt’s paper, 1983, and that all six can be real.',
     },
   },
   excessNote: [

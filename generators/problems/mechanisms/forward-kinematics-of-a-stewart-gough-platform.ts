@@ -93,7 +93,7 @@ export default defineProblem({
       venue: 'Journal of Mechanical Design 115(2) (1993), 277–282',
       doi: '10.1115/1.2919188',
       bib: { type: 'article', journal: 'Journal of Mechanical Design', volume: '115', number: '2', pages: '277--282' },
-      note: 'Raghavan found the 40 by polynomial continuation; proofs followed by Ronga and Vust, by Lazard and by Mourrain (1993–1995), and Husty (Mechanism and Machine Theory 31, 1996, doi 10.1016/0094-114X(95)00091-C) derived a degree-40 polynomial in Study parameters. That all 40 can be real: P. Dietmaier, The Stewart–Gough platform of general geometry can have 40 real postures, in Advances in Robot Kinematics: Analysis and Control, Kluwer 1998, 7–16 (doi 10.1007/978-94-015-9064-8_1). DOIs and titles as secondary citations give them; issue, pages and the other proofs are from memory.',
+      note: 'Raghavan found the 40 by polynomial continuation; proofs followed by Ronga and Vust, by Lazard and by Mourrain (1993–1995), and Husty (Mechanism and Machine Theory 31, 1996, doi 10.1016/0094-114X(95)00091-C) derived a degree-40 polynomial in Study parameters. That all 40 can be real: P. Dietmaier, The Stewart–Gough platform of general geometry can have 40 real postures, in Advances in Robot Kinematics: Analysis and Control, Kluwer 1998, 7–16 (doi 10.1007/978-94-015-9064-8_1). DOIs and titles as secondary citations give them. That Ronga, Lazard and Mourrain each established the count 40 is as L. Rolland’s survey of the kinematics of parallel manipulators says (doi 10.5772/5431); Vust as Ronga’s coauthor, the years and Husty’s issue and pages are from memory.',
     },
   },
   excessNote: [

@@ -76,7 +76,7 @@ export default defineProblem({
       venue: 'International Journal of Computer Vision 13(3) (1994), 331–356',
       doi: '10.1007/BF02028352',
       bib: { type: 'article', journal: 'International Journal of Computer Vision', volume: '13', number: '3', pages: '331--356' },
-      note: 'They review the direct solutions from Grunert (1841) on, each of which reduces the problem to a polynomial of degree four, so at most four poses. Issue, pages and DOI as several secondary citations give them. From memory, not re-read: that all four can be real and in front of the camera (Fischler and Bolles, 1981, gave such a configuration).',
+      note: 'They review the direct solutions from Grunert (1841) on, each of which reduces the problem to a polynomial of degree four, so at most four poses. Issue, pages and DOI as several reference lists that cite the article give them. From memory, not re-read: that all four can be real and in front of the camera, with such a configuration given by Fischler and Bolles (Communications of the ACM 24(6), 1981, 381–395, doi 10.1145/358669.358692, as reference lists give them).',
     },
   },
   excessNote: [

@@ -97,8 +97,9 @@ export default defineProblem({
       year: 2004,
       title: 'An efficient solution to the five-point relative pose problem',
       venue: 'IEEE Transactions on Pattern Analysis and Machine Intelligence 26(6) (2004), 756–770',
+      doi: '10.1109/TPAMI.2004.17',
       bib: { type: 'article', journal: 'IEEE Transactions on Pattern Analysis and Machine Intelligence', volume: '26', number: '6', pages: '756--770' },
-      note: 'The count of the five-point problem is 10 essential matrices (Demazure, Sur deux problèmes de reconstruction, INRIA research report 882, 1988, from memory), and Nistér solves it through a degree-10 polynomial. Each essential matrix E = [t]×R comes from exactly two rotations, R and its twist by a half-turn about t (the twisted pair), with t fixed up to scale: this factorisation is classical (from memory), and it makes the 20 = 10 × 2 relative poses this formulation counts. Volume, issue and pages as several secondary citations give them.',
+      note: 'The count of the five-point problem is 10 essential matrices: Nistér’s introduction (read in a text copy of the paper) states that, after Kruppa’s bound of eleven, it was shown that there are at most ten solutions and ten in general counting complex ones, and he solves the problem through a degree-10 polynomial. That this improvement is Demazure’s (Sur deux problèmes de reconstruction, INRIA research report 882, 1988) is from memory. Each essential matrix E = [t]×R comes from exactly two rotations, R and its twist by a half-turn about t (the twisted pair), with t fixed up to scale: this factorisation is classical (from memory), and it makes the 20 = 10 × 2 relative poses this formulation counts. Volume, issue, pages and DOI as several reference lists that cite the article give them.',
     },
   },
   excessNote: [

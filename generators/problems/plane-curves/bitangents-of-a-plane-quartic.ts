@@ -96,7 +96,7 @@ export default defineProblem({
     value: 28,
     source: {
       ...pluckerBook,
-      note: 'The book’s formula for the double tangents of a curve of degree d without singular points, ½d(d − 2)(d² − 9), gives 28 for d = 4 (p. 211, as Cayley cites it in 1849). From memory, not re-read: that the book shows a quartic with four ovals and 28 real bitangents, its publisher (Adolph Marcus), and that the real counts 28, 16, 8, 4 are Zeuthen’s (1873).',
+      note: 'The book’s formula for the double tangents of a curve of degree d without singular points, ½d(d − 2)(d² − 9), gives 28 for d = 4 (p. 211, as Cayley cites it in 1849; seen in his Collected Mathematical Papers, vol. 1, p. 446). Zeuthen (1873) sorted the real smooth quartics into six types, and the type fixes the number of real bitangents (as the companion page of Plaumann, Sturmfels and Vinzant’s paper on quartics and their bitangents states). From memory, not re-read: that the book shows a quartic with four ovals and 28 real bitangents, its publisher (Adolph Marcus), and the real counts 28, 16, 8, 4 themselves.',
     },
   },
   publishedGroup: { name: 'Sp(6, 2), the symplectic group over the field of two elements', order: '1451520', citation: 'C. Jordan, Traité des substitutions et des équations algébriques, Gauthier-Villars, Paris 1870; J. Harris, Galois groups of enumerative problems, Duke Math. J. 46 (1979) 685–724' },

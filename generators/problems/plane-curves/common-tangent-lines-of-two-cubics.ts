@@ -57,7 +57,7 @@ export default defineProblem({
     value: 36,
     source: {
       ...pluckerBook,
-      note: 'The class d(d − 1) of a smooth plane curve of degree d, 6 for a cubic, is the first of Plücker’s formulas; he published them in 1834 (J. reine angew. Math. 12) and collected them in this book (from memory; page numbers not re-read). The count 36 is then Bézout’s theorem for the two dual sextics in the plane of lines (Fulton, Algebraic Curves, 1969), which meet transversally for general cubics.',
+      note: 'The class d(d − 1) of a smooth plane curve of degree d, 6 for a cubic, is the first of Plücker’s formulas; he published them in J. reine angew. Math. 12 and gave a complete account in this book (as an encyclopaedia passage on Plücker says; the year 1834 and the page numbers not re-read). The count 36 is then Bézout’s theorem for the two dual sextics in the plane of lines (Fulton, Algebraic Curves, 1969), which meet transversally for general cubics.',
     },
   },
   excessNote: [

@@ -49,7 +49,7 @@ export function flexProblem(spec: FlexProblemSpec): ProblemDefinition {
       value: count,
       source: {
         ...pluckerBook,
-        note: `Plücker's count 3d(d − 2) of the flexes of a curve of degree d without singular points gives ${count} for d = ${d}; the characterisation of the flexes by the Hessian is Hesse's (J. reine angew. Math. 28, 1844). Page numbers not re-read. The bound d(d − 2) on the real flexes is Klein's (Math. Ann. 10, 1876), from memory.`,
+        note: `Plücker's count 3d(d − 2) of the flexes of a curve of degree d without singular points gives ${count} for d = ${d}; that Plücker obtained the count and Hesse (J. reine angew. Math. 28, 1844) first gave the theory through the Hessian in complete form is as an encyclopaedia article on curves says. Page numbers not re-read. The bound d(d − 2) on the real flexes is Klein's (Math. Ann. 10, 1876), from memory.`,
       },
     },
     excessNote: `None: the Hessian of a general ${spec.noun} meets the curve transversally in $${d} \\cdot ${3 * (d - 2)} = ${count}$ points, and none lies on the line at infinity (a general curve has no flex there), so every path of the total-degree homotopy ends at a distinct flex. Special curves lose flexes to coincidence: a point where the tangent meets the curve four times (a hyperflex) counts twice.`,

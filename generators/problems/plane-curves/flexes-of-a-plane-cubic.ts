@@ -44,7 +44,7 @@ export default defineProblem({
       title: 'Über die Wendepuncte der Curven dritter Ordnung',
       venue: 'Journal für die reine und angewandte Mathematik 28 (1844), 97–107',
       bib: { type: 'article', journal: 'Journal für die reine und angewandte Mathematik', volume: '28', pages: '97--107' },
-      note: 'The flexes as the intersection with the Hessian curve; the count 3d(d − 2) for a curve of degree d was obtained by Plücker, and Hesse gave the theory in complete form in this paper (as an encyclopaedia article on curves that cites it says). Volume and pages are as one secondary citation gives them, not checked against the volume. That exactly three flexes of a real smooth cubic are real is classical (from memory).',
+      note: 'The flexes as the intersection with the Hessian curve; the count 3d(d − 2) for a curve of degree d was obtained by Plücker, and Hesse gave the theory in complete form in this paper (as an encyclopaedia article on curves that cites it says). Volume and pages are as one secondary citation gives them, not checked against the volume. That exactly three flexes of a real smooth cubic are real is classical (from memory); Cayley finds exactly three real ones, the flex at infinity and two of the other eight, on the non-singular divergent parabolas y² = cubic (Collected Mathematical Papers vol. 5, paper 345, p. 285, read in the TIB scan).',
     },
   },
   publishedGroup: { name: 'the affine special linear group of (Z/3)², order 9 · 24', order: '216', citation: 'J. Harris, Galois groups of enumerative problems, Duke Math. J. 46 (1979) 685–724 (the section from memory)' },

@@ -56,9 +56,10 @@ export default defineProblem({
       authors: ['M. Kontsevich', 'Yu. Manin'],
       year: 1994,
       title: 'Gromov–Witten classes, quantum cohomology, and enumerative geometry',
-      venue: 'Communications in Mathematical Physics 164 (1994)',
-      bib: { type: 'article', journal: 'Communications in Mathematical Physics', volume: '164' },
-      note: 'The recursion for N_d; N_3 = 12 was known classically as the number of singular members of the pencil of cubics through eight points, 3(d − 1)² for d = 3. Full page numbers are not given here (not re-read).',
+      venue: 'Communications in Mathematical Physics 164(3) (1994), 525–562',
+      doi: '10.1007/BF02101490',
+      bib: { type: 'article', journal: 'Communications in Mathematical Physics', volume: '164', number: '3', pages: '525--562' },
+      note: 'The recursion for N_d; N_3 = 12 was known classically as the number of singular members of the pencil of cubics through eight points, 3(d − 1)² for d = 3. Volume and pages as the journal’s first page shows them (a scan of it was seen), the issue as zbMATH gives it, the DOI as a reference list that cites the article gives it.',
     },
   },
   excessNote: [

@@ -67,7 +67,7 @@ export default defineProblem({
       venue: 'Leipzig (1879); reprinted by Springer, Berlin (1979), edited by S. L. Kleiman',
       url: 'https://archive.org/details/kalklderabzh00schuuoft',
       bib: { type: 'book', address: 'Leipzig' },
-      note: 'Two lines meet four general lines: Schubert’s method counts them with the four lines moved into special position, where the solutions can be seen, and keeps the number (his principle of conservation of number). The reprint (ISBN 3-540-09233-1) and the linked scan of the 1879 edition are as a reference list that cites the book gives them; the publisher of 1879, B. G. Teubner, is from memory.',
+      note: 'Two lines meet four general lines: Schubert’s method counts them with the four lines moved into special position, where the solutions can be seen, and keeps the number (his principle of conservation of number). The reprint (ISBN 3-540-09233-1) and the linked scan of the 1879 edition are as a reference list that cites the book gives them; the place, Leipzig, is as encyclopaedia entries on Schubert give it, and the publisher, B. G. Teubner, as secondary reference lists give it (not seen on the scan’s title page).',
     },
   },
   publishedGroup: { name: 'S₂, the full symmetric group', order: '2', citation: 'J. Harris, Galois groups of enumerative problems, Duke Math. J. 46 (1979) 685–724' },
