@@ -54,6 +54,11 @@ export const definitionSchema = z.object({
     .min(1, { error: 'needs at least one instance' }),
   solver: z.looseObject({ kind: text }).optional(),
   reads: z.array(text.refine((f) => f.startsWith('/'), { error: 'must be an absolute path' })).optional(),
-  drawing: z.object({ window: fn, configuration: fn, solution: fn, projection: text.optional() }).optional(),
+  drawing: z
+    .union([
+      z.object({ kind: z.literal('space'), sight: fn, configuration: fn, solution: fn, projection: text.optional() }),
+      z.object({ window: fn, configuration: fn, solution: fn, projection: text.optional() }),
+    ])
+    .optional(),
   ladders: z.array(ladderMembershipSchema).optional(),
 });
