@@ -4,6 +4,7 @@ import { parametersOf } from '../../../../src/atlas/parameters-of.ts';
 import { type SolveReport, solveSystem } from '../../../../src/engine/index.ts';
 import { coordinatesOf, isRealValues } from '../../../../generators/pipeline/coordinates-of.ts';
 import { figureItemSchema, type FigureItem } from '../../../../src/atlas/figure.ts';
+import { spaceItemSchema, type SpaceItem } from '../../../../src/atlas/space-figure.ts';
 
 /** A solve of one instance with the problem's own start system, and the real count judged in its coordinates. */
 export interface SolvedInstance {
@@ -51,14 +52,15 @@ export function splitSeeds(all: readonly number[], engineIssues: readonly number
  * The drawing of every real solution of a solved demo instance (real parts of its stored coordinates, as the
  * writer draws them), each item checked against the figure schema; throws naming the problem on a bad item.
  */
-export function drawnRealSolutions(definition: ProblemDefinition, instance: InstanceDefinition, solved: SolvedInstance): FigureItem[][] {
+export function drawnRealSolutions(definition: ProblemDefinition, instance: InstanceDefinition, solved: SolvedInstance): (FigureItem | SpaceItem)[][] {
   const params = Object.fromEntries(Object.entries(instance.parameters ?? {}).map(([k, v]) => [k, typeof v === 'number' ? v : v[0]]));
   return solved.report.solutions
     .map((s) => coordinatesOf(definition, s.point, definition.slug))
     .filter((values) => isRealValues(values))
     .map((values) => {
       const items = definition.drawing!.solution(Array.from(values).filter((_, i) => i % 2 === 0), params);
-      for (const item of items) if (!figureItemSchema.safeParse(item).success) throw new Error(`${definition.slug}: bad figure item ${JSON.stringify(item)}`);
+      const schema = 'kind' in definition.drawing! ? spaceItemSchema : figureItemSchema;
+      for (const item of items) if (!schema.safeParse(item).success) throw new Error(`${definition.slug}: bad figure item ${JSON.stringify(item)}`);
       return items;
     });
 }
