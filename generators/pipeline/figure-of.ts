@@ -1,6 +1,6 @@
 import { figureSchema, type Figure } from '../../src/atlas/figure.ts';
 import { spaceFigureSchema, type SpaceFigure, type SpaceItem } from '../../src/atlas/space-figure.ts';
-import type { ProblemDefinition } from '../../src/atlas/definition.ts';
+import { isSpaceDrawing, type ProblemDefinition } from '../../src/atlas/definition.ts';
 import { AtlasError } from './atlas-error.ts';
 
 /**
@@ -27,19 +27,18 @@ export function figureOf(
   };
   const projection = drawing.projection ? { projection: drawing.projection } : {};
   let parsed;
-  if ('kind' in drawing && drawing.kind === 'space') {
+  if (isSpaceDrawing(drawing)) {
     const items: SpaceItem[] = call('configuration', () => drawing.configuration(real));
     for (const s of realSolutions) {
       for (const item of call('solution', () => drawing.solution(s.values, real))) items.push({ ...item, solution: s.index });
     }
     parsed = spaceFigureSchema.safeParse({ kind: 'space', sight: call('sight', () => drawing.sight(real, items)), items, ...projection });
   } else {
-    const plane = drawing as Exclude<typeof drawing, { kind: 'space' }>;
-    const items = call('configuration', () => plane.configuration(real));
+    const items = call('configuration', () => drawing.configuration(real));
     for (const s of realSolutions) {
-      for (const item of call('solution', () => plane.solution(s.values, real))) items.push({ ...item, solution: s.index });
+      for (const item of call('solution', () => drawing.solution(s.values, real))) items.push({ ...item, solution: s.index });
     }
-    parsed = figureSchema.safeParse({ window: call('window', () => plane.window(real, items)), items, ...projection });
+    parsed = figureSchema.safeParse({ window: call('window', () => drawing.window(real, items)), items, ...projection });
   }
   if (!parsed.success) {
     const issue = parsed.error.issues[0]!;

@@ -119,6 +119,11 @@ export interface ProblemDefinition {
   readonly ladders?: readonly LadderMembership[];
 }
 
+/** Whether a definition's drawing draws in 3-space. */
+export function isSpaceDrawing(drawing: DrawingDefinition | SpaceDrawingDefinition): drawing is SpaceDrawingDefinition {
+  return 'kind' in drawing && drawing.kind === 'space';
+}
+
 /** Identity helper that gives a definition module its type checking: `export default defineProblem({ … })`. */
 export function defineProblem(definition: ProblemDefinition): ProblemDefinition {
   return definition;

@@ -31,6 +31,11 @@ export const spaceFigureSchema = z.object({
   projection: z.string().min(1).optional(),
 });
 
+/** Whether a record's figure is a figure in 3-space (plane figures have no `kind`). */
+export function isSpaceFigure<T extends object>(figure: T | SpaceFigure): figure is SpaceFigure {
+  return 'kind' in figure && figure.kind === 'space';
+}
+
 export type SpacePoint = z.infer<typeof spacePointSchema>;
 export type SpaceItem = z.infer<typeof spaceItemSchema>;
 export type Sight = z.infer<typeof sightSchema>;

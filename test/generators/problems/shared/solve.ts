@@ -1,4 +1,4 @@
-import type { InstanceDefinition, ProblemDefinition } from '../../../../src/atlas/definition.ts';
+import { isSpaceDrawing, type DrawingDefinition, type InstanceDefinition, type ProblemDefinition } from '../../../../src/atlas/definition.ts';
 import { systemOf } from '../../../../src/atlas/system-of.ts';
 import { parametersOf } from '../../../../src/atlas/parameters-of.ts';
 import { type SolveReport, solveSystem } from '../../../../src/engine/index.ts';
@@ -59,10 +59,17 @@ export function drawnRealSolutions(definition: ProblemDefinition, instance: Inst
     .filter((values) => isRealValues(values))
     .map((values) => {
       const items = definition.drawing!.solution(Array.from(values).filter((_, i) => i % 2 === 0), params);
-      const schema = 'kind' in definition.drawing! ? spaceItemSchema : figureItemSchema;
+      const schema = isSpaceDrawing(definition.drawing!) ? spaceItemSchema : figureItemSchema;
       for (const item of items) if (!schema.safeParse(item).success) throw new Error(`${definition.slug}: bad figure item ${JSON.stringify(item)}`);
       return items;
     });
+}
+
+/** A definition's plane drawing; throws naming the problem when it has none or draws in 3-space. */
+export function planeDrawing(definition: ProblemDefinition): DrawingDefinition {
+  const drawing = definition.drawing;
+  if (!drawing || isSpaceDrawing(drawing)) throw new Error(`${definition.slug}: no plane drawing`);
+  return drawing;
 }
 
 /** The largest residual ‖F(x)‖∞ / (1 + ‖x‖∞) over a report's found solutions (0 when none): every found solution must solve. */
