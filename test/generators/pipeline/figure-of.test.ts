@@ -9,7 +9,8 @@ const space: SpaceDrawingDefinition = {
   configuration: (p) => [{ shape: 'dot', at: [p.a ?? 0, 0, 0], layer: 'given', label: 'the origin' }],
   solution: ([x, y]) => [{ shape: 'stick', from: [0, 0, 0], to: [x!, y!, 1], layer: 'solution' }],
 };
-const inSpace = (drawing: SpaceDrawingDefinition): ProblemDefinition => ({ ...twoConics, drawing });
+const plane = twoConics as unknown as ProblemDefinition;
+const inSpace = (drawing: SpaceDrawingDefinition): ProblemDefinition => ({ ...plane, drawing });
 const real = { a: [0.5, 0] as const };
 const solutions = [{ index: 0, values: [1, 2] }, { index: 3, values: [-1, 0.5] }];
 
@@ -29,7 +30,7 @@ describe('figureOf', () => {
   it('still makes a plane figure from a plane drawing', () => {
     const demo = twoConics.instances.find((i) => i.kind === 'demo')!;
     const parameters = Object.fromEntries(Object.entries(demo.parameters!).map(([k, v]) => [k, [typeof v === 'number' ? v : v[0], 0] as const]));
-    const figure = figureOf(twoConics, parameters, [{ index: 0, values: [1, 2] }], 'toy');
+    const figure = figureOf(plane, parameters, [{ index: 0, values: [1, 2] }], 'toy');
     expect(figure).toMatchObject({ window: { xMin: -4 } });
     expect(figure!.items.at(-1)).toEqual({ shape: 'point', x: 1, y: 2, layer: 'solution', solution: 0 });
   });
