@@ -93,11 +93,13 @@ describe('turning the figure', () => {
     const page = await ready(LINES);
     const fig = page.locator('space-figure').first();
     const button = fig.locator('button[data-toggle-layer="solution"]');
+    const sight0 = await sightOf(page);
     await button.click();
     expect(await button.getAttribute('aria-pressed')).toBe('false');
     await expect.poll(() => fig.locator('[data-layer="solution"]').count()).toBe(0);
     await fig.locator('button[data-turn-by="15"]').click();
-    await expect.poll(() => sightOf(page)).not.toBeNull();
+    await expect.poll(() => sightOf(page)).not.toBe(sight0);
+    expect(await fig.locator('[data-layer="given"]').count()).toBeGreaterThan(0);
     expect(await fig.locator('[data-layer="solution"]').count()).toBe(0);
     await button.click();
     await expect.poll(() => fig.locator('[data-layer="solution"]').count()).toBeGreaterThanOrEqual(27);
