@@ -56,6 +56,13 @@ export const definitionSchema = z.object({
     .min(1, { error: 'needs at least one instance' }),
   solver: z.looseObject({ kind: text }).optional(),
   reads: z.array(text.refine((f) => f.startsWith('/'), { error: 'must be an absolute path' })).optional(),
-  drawing: z.object({ window: fn, configuration: fn, solution: fn, projection: text.optional() }).optional(),
+  // A plane drawing has a window; a drawing in 3-space (kind 'space') has a sight instead.
+  drawing: z
+    .object({ kind: z.literal('space').optional(), window: fn.optional(), sight: fn.optional(), configuration: fn, solution: fn, projection: text.optional() })
+    .superRefine((d, ctx) => {
+      const needed = d.kind === 'space' ? 'sight' : 'window';
+      if (d[needed] === undefined) ctx.addIssue({ code: 'custom', path: [needed], message: `missing (a ${d.kind === 'space' ? 'drawing in 3-space' : 'plane drawing'} needs it)` });
+    })
+    .optional(),
   ladders: z.array(ladderMembershipSchema).optional(),
 });

@@ -2,6 +2,7 @@ import type { ExprNode, exprBuilders as ExprOps, ParameterProblem, PolynomialSys
 import type { CountSource } from './source.ts';
 import type { PublishedGroup } from './published-group.ts';
 import type { FigureItem } from './figure.ts';
+import type { Sight, SpaceItem } from './space-figure.ts';
 import type { LadderMembership } from './ladder-membership.ts';
 
 /** A complex value in a definition: a real number, or [re, im]. */
@@ -32,6 +33,19 @@ export interface DrawingDefinition {
   readonly configuration: (parameters: Readonly<Record<string, number>>) => FigureItem[];
   readonly solution: (values: readonly number[], parameters: Readonly<Record<string, number>>) => FigureItem[];
   /** One sentence for the caption: the plane drawn and how space is projected to it ("Drawn in the (x, y)-plane."). */
+  readonly projection?: string;
+}
+
+/**
+ * How to draw an instance in 3-space (`kind: 'space'`): items of 3-space (src/atlas/space-figure.ts) for the given
+ * configuration and for one real solution; `sight` picks the static view shown first (given every item drawn), and
+ * `projection` says in one sentence what is drawn. The page adds the view's own sentence and lets the reader turn it.
+ */
+export interface SpaceDrawingDefinition {
+  readonly kind: 'space';
+  readonly sight: (parameters: Readonly<Record<string, number>>, items: readonly SpaceItem[]) => Sight;
+  readonly configuration: (parameters: Readonly<Record<string, number>>) => SpaceItem[];
+  readonly solution: (values: readonly number[], parameters: Readonly<Record<string, number>>) => SpaceItem[];
   readonly projection?: string;
 }
 
@@ -103,9 +117,14 @@ export interface ProblemDefinition {
    * definition hash, so changing one makes `refresh` re-solve this problem. A listed file that is missing hashes as missing.
    */
   readonly reads?: readonly string[];
-  readonly drawing?: DrawingDefinition;
+  readonly drawing?: DrawingDefinition | SpaceDrawingDefinition;
   /** The ladders this problem is a rung of, for links between the rungs. */
   readonly ladders?: readonly LadderMembership[];
+}
+
+/** Whether a definition's drawing draws in 3-space. */
+export function isSpaceDrawing(drawing: DrawingDefinition | SpaceDrawingDefinition): drawing is SpaceDrawingDefinition {
+  return 'kind' in drawing && drawing.kind === 'space';
 }
 
 /** Identity helper that gives a definition module its type checking: `export default defineProblem({ … })`. */

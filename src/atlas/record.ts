@@ -2,6 +2,7 @@ import { z } from 'astro/zod';
 import { publishedGroupSchema } from './published-group.ts';
 import { countSourceSchema } from './source.ts';
 import { figureSchema } from './figure.ts';
+import { spaceFigureSchema } from './space-figure.ts';
 import { ladderMembershipSchema } from './ladder-membership.ts';
 
 /** The record format's version; bump it on any incompatible change and teach the reader to migrate. */
@@ -137,7 +138,8 @@ export const instanceResultSchema = z.object({
   counts: countsSchema,
   paths: pathStatsSchema,
   solutions: z.array(solutionSchema),
-  figure: figureSchema.nullable(),
+  /** A plane figure, or a figure in 3-space (`kind: 'space'`) that the page lets the reader turn. */
+  figure: z.union([figureSchema, spaceFigureSchema]).nullable(),
   /** Plain-language notes the engine produced (why a count falls short, what was retried). */
   notes: z.array(z.string()),
   /** Completeness checks without a published count (absent in records written before they existed). */

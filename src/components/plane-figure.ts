@@ -9,6 +9,7 @@ import { scaleLinear } from 'd3-scale';
 import { zoom, zoomIdentity, type D3ZoomEvent, type ZoomBehavior, type ZoomTransform } from 'd3-zoom';
 import { axisTicks, gridSvg } from '../plots/axis-ticks.ts';
 import { MARGIN, POINT_RADIUS } from '../plots/figure-constants.ts';
+import { linkFigureToTable } from './figure-table-link.ts';
 
 /** Zoom limits (the drawing reaches MARGIN beyond the window, so zooming out to 1 / (1 + 2·MARGIN) shows all of it). */
 const MIN_ZOOM = 1 / (1 + 2 * MARGIN), MAX_ZOOM = 40;
@@ -60,7 +61,7 @@ class PlaneFigure extends HTMLElement {
     }
     this.querySelector('button[data-reset-view]')?.addEventListener('click', () => this.#reset());
     this.querySelector('button[data-export-png]')?.addEventListener('click', () => void this.#exportPng());
-    this.#linkTable(svg);
+    linkFigureToTable(this, svg);
     this.querySelector<HTMLElement>('.figure-tools')?.removeAttribute('hidden');
     this.setAttribute('data-ready', '');
   }
@@ -85,31 +86,6 @@ class PlaneFigure extends HTMLElement {
     else if (e.key === '0') this.#reset();
     else return;
     e.preventDefault();
-  }
-
-  #linkTable(svg: SVGSVGElement): void {
-    const table = this.dataset.table ? document.getElementById(this.dataset.table) : null;
-    const mark = (cls: string, index: string | null) => {
-      for (const el of [...this.querySelectorAll(`.${cls}`), ...(table?.querySelectorAll(`tr.${cls}`) ?? [])]) el.classList.remove(cls);
-      if (index === null) return;
-      for (const el of this.querySelectorAll(`[data-solution="${CSS.escape(index)}"]`)) el.classList.add(cls);
-      table?.querySelector(`tr[data-solution-row="${CSS.escape(index)}"]`)?.classList.add(cls);
-    };
-    const solutionOf = (target: EventTarget | null) => (target as Element | null)?.closest?.('[data-solution]')?.getAttribute('data-solution') ?? null;
-    svg.addEventListener('pointerover', (e) => mark('is-focus', solutionOf(e.target)));
-    svg.addEventListener('pointerleave', () => mark('is-focus', null));
-    svg.addEventListener('click', (e) => {
-      const index = solutionOf(e.target);
-      if (index === null) return;
-      mark('is-selected', index);
-      table?.dispatchEvent(new CustomEvent('solution-reveal', { detail: { index: Number(index) } }));
-    });
-    if (!table) return;
-    const rowOf = (target: EventTarget | null) => (target as Element | null)?.closest?.('tr[data-solution-row]')?.getAttribute('data-solution-row') ?? null;
-    table.addEventListener('pointerover', (e) => mark('is-focus', rowOf(e.target)));
-    table.addEventListener('pointerleave', () => mark('is-focus', null));
-    table.addEventListener('focusin', (e) => mark('is-focus', rowOf(e.target)));
-    table.addEventListener('focusout', () => mark('is-focus', null));
   }
 
   #toggle(button: HTMLButtonElement): void {

@@ -50,6 +50,8 @@ const malformed: [string, (d: Mutable) => void, string, RegExp][] = [
   ['an unclosed dollar in the excess note', (d) => (d.excessNote = 'Costs $5 to fix.'), 'excessNote', /unclosed \$/],
   ['a group naming a non-unknown', (d) => (d.formulation.groups = [['x'], ['z']]), 'formulation.groups[1][0]', /"z" is not an unknown/],
   ['a drawing without its solution function', (d) => delete d.drawing.solution, 'drawing.solution', /missing|must be a function/],
+  ['a plane drawing without its window', (d) => delete d.drawing.window, 'drawing.window', /missing/],
+  ['a drawing in 3-space without its sight', (d) => (d.drawing.kind = 'space'), 'drawing.sight', /missing .*3-space/],
 ];
 
 describe.each(malformed)('a definition with %s', (_name, edit, path, message) => {

@@ -10,7 +10,7 @@ describe('figureScene', () => {
   // Apollonius: 8 circles tangent to three general circles (Viète 1600; Drechsler–Sterz 1999), all real in the demo.
   it('lays out the Apollonius fixture as 3 given and 8 solution circles, each solution numbered', () => {
     const demo = fixtureRecord('apollonius-circles').instances.find((i) => i.kind === 'demo')!;
-    const scene = figureScene(demo.figure!, 640);
+    const scene = figureScene(demo.figure! as Figure, 640);
     const layer = (n: string) => scene.layers.find((l) => l.name === n)!.items;
     expect(scene.layers.map((l) => l.name)).toEqual(['given', 'solution', 'tangency']);
     expect(layer('given').filter((i) => i.tag === 'circle')).toHaveLength(3);

@@ -3,13 +3,14 @@ import { figureScene } from '../../src/plots/figure-scene.ts';
 import { figureSvg } from '../../src/plots/figure-svg.ts';
 import { standaloneFigureCss } from '../../src/site/figure-export-css.ts';
 import { fixtureRecord } from '../site/fixture-record.ts';
+import type { Figure } from '../../src/atlas/figure.ts';
 import { readFileSync } from 'node:fs';
 
 const css = (name: string) => readFileSync(new URL(`../../src/styles/${name}`, import.meta.url), 'utf8');
 
 describe('figureSvg', () => {
   // Apollonius fixture: 8 circles tangent to three circles (Viète 1600; Drechsler–Sterz 1999), all real in the demo.
-  const figure = fixtureRecord('apollonius-circles').instances.find((i) => i.kind === 'demo')!.figure!;
+  const figure = fixtureRecord('apollonius-circles').instances.find((i) => i.kind === 'demo')!.figure! as Figure;
   const scene = figureScene(figure, 640);
 
   it('writes one item per scene item, each with its layer, solution and title, inside the viewport', () => {

@@ -37,6 +37,7 @@ describe('axe-core on every page type', () => {
     ['problem page (figure, table, downloads, citation)', APOLLONIUS],
     ['problem page with 3264 solutions', FIVE_CONICS],
     ['problem page drawn by a projection of space', '/problems/lines-meeting-four-lines/'],
+    ['problem page with a figure in 3-space', '/problems/lines-on-a-cubic-surface/'],
     ['static table page', `${FIVE_CONICS}solutions/stage-lights/2/`],
     ['families', '/families/'],
     ['family', '/families/conics/'],

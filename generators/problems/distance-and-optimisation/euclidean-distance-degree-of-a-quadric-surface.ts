@@ -1,13 +1,13 @@
 import { defineProblem, type ComplexInput } from '../../../src/atlas/definition.ts';
-import type { FigureItem } from '../../../src/atlas/figure.ts';
+import type { SpaceItem } from '../../../src/atlas/space-figure.ts';
+import { clearestSight } from '../../../src/plots/clearest-sight.ts';
 import { coefficientNames, monomialExponents } from '../shared/monomials.ts';
 import { polynomial } from '../shared/form.ts';
 import { gradientOnChart } from '../shared/gradient.ts';
 import { genericInstance } from '../shared/generic-instance.ts';
 import { coefficientsOf, linearForm, product, sum } from '../shared/numeric-polynomial.ts';
-import { cubeEdges, project } from '../shared/axonometric.ts';
-import { surfaceSlices } from '../shared/surface-slices.ts';
-import { fitWindow } from '../shared/fit-window.ts';
+import { boxEdges } from '../shared/space-box.ts';
+import { spaceSections } from '../shared/space-sections.ts';
 import { euclideanDistanceDegreePaper } from './ed-degree-source.ts';
 
 const exponents = monomialExponents(3, 2);
@@ -26,14 +26,11 @@ const demoParameters: Record<string, ComplexInput> = Object.fromEntries([...shel
 const valueAt = (q: Readonly<Record<string, number>>) => (x: number, y: number, z: number): number =>
   exponents.reduce((s, [i, j, l], m) => s + q[names[m]!]! * x ** i! * y ** j! * z ** l!, 0);
 
-const configuration = (q: Readonly<Record<string, number>>): FigureItem[] => {
-  const [px, py] = project(q.a!, q.b!, q.c!);
-  return [
-    ...cubeEdges(FRAME, 'given', 'frame'),
-    ...surfaceSlices(valueAt(q), [-0.9, -0.45, 0, 0.45, 0.9], FRAME, 'given', 'sections of the quadric'),
-    { shape: 'point', x: px, y: py, layer: 'given', label: 'the point' },
-  ];
-};
+const configuration = (q: Readonly<Record<string, number>>): SpaceItem[] => [
+  ...boxEdges(FRAME, 'construction', 'the cube from −2.2 to 2.2'),
+  ...spaceSections(valueAt(q), [-0.9, -0.45, 0, 0.45, 0.9], FRAME, 'given', 'sections of the quadric'),
+  { shape: 'dot', at: [q.a!, q.b!, q.c!], layer: 'given', label: 'the point' },
+];
 
 export default defineProblem({
   slug: 'euclidean-distance-degree-of-a-quadric-surface',
@@ -83,15 +80,13 @@ export default defineProblem({
   ],
   solver: { kind: 'multihomogeneous' },
   drawing: {
-    projection: 'An orthographic view of 3-space, turned 0.5 rad about the vertical z-axis and tilted 0.45 rad toward the viewer; the quadric is drawn by five horizontal sections, the cube from −2.2 to 2.2 on each axis for scale, and each real critical point is joined to the given point.',
-    window: (_, items) => fitWindow([...cubeEdges(FRAME, 'given', 'frame'), ...(items ?? [])], 0.05),
+    kind: 'space',
+    projection: 'The quadric is drawn by five horizontal sections inside the cube from −2.2 to 2.2 on each axis (edges dashed), and each real critical point is joined to the given point.',
+    sight: (_, items) => clearestSight(items.filter((i) => i.shape === 'dot')),
     configuration,
-    solution: ([x, y, z], q): FigureItem[] => {
-      const [sx, sy] = project(x!, y!, z!);
-      return [
-        { shape: 'polyline', points: [project(q.a!, q.b!, q.c!), [sx, sy]], closed: false, layer: 'normals' },
-        { shape: 'point', x: sx, y: sy, layer: 'solution' },
-      ];
-    },
+    solution: ([x, y, z], q): SpaceItem[] => [
+      { shape: 'stick', from: [q.a!, q.b!, q.c!], to: [x!, y!, z!], layer: 'normals' },
+      { shape: 'dot', at: [x!, y!, z!], layer: 'solution' },
+    ],
   },
 });

@@ -2,8 +2,9 @@ import type { ComplexInput, ProblemDefinition } from '../../../src/atlas/definit
 import { coefficientNames, monomialExponents } from '../shared/monomials.ts';
 import { polynomial } from '../shared/form.ts';
 import { genericInstance } from '../shared/generic-instance.ts';
-import { cubeEdges, pointWithDrop } from '../shared/axonometric.ts';
-import { fitWindow } from '../shared/fit-window.ts';
+import type { SpaceItem } from '../../../src/atlas/space-figure.ts';
+import { clearestSight } from '../../../src/plots/clearest-sight.ts';
+import { boxEdges } from '../shared/space-box.ts';
 
 /** What distinguishes one "three surfaces of degree d meet" page from another. */
 export interface SurfaceTripleSpec {
@@ -23,7 +24,7 @@ export function surfaceTripleProblem(spec: SurfaceTripleSpec): ProblemDefinition
   const exponents = monomialExponents(3, d);
   const names = ['p', 'q', 'r'].map((prefix) => coefficientNames(prefix, 3, d));
   const parameters: Record<string, ComplexInput> = Object.fromEntries(names.flatMap((group, k) => group.map((n, m) => [n, spec.demo.surfaces[k]![m]!] as const)));
-  const frame = () => cubeEdges(spec.frame, 'given', 'frame');
+  const frame = () => boxEdges(spec.frame, 'construction', `the cube from −${spec.frame} to ${spec.frame}`);
   return {
     slug: spec.slug,
     title: `Points common to three ${spec.noun} surfaces`,
@@ -54,10 +55,14 @@ export function surfaceTripleProblem(spec: SurfaceTripleSpec): ProblemDefinition
       { id: spec.demo.id, kind: 'demo', label: spec.demo.label, description: spec.demo.description, seed: spec.demo.seed, parameters },
     ],
     drawing: {
-      projection: `An orthographic view of 3-space, turned 0.5 rad about the vertical z-axis and tilted 0.45 rad toward the viewer; the cube from −${spec.frame} to ${spec.frame} on each axis is drawn for scale, and a thin line drops from each real point to the cube's floor.`,
-      window: (_, items) => fitWindow([...frame(), ...(items ?? [])], 0.05),
+      kind: 'space',
+      projection: `The cube from −${spec.frame} to ${spec.frame} on each axis is drawn for scale (edges dashed), and a thin line drops from each real point to the cube's floor.`,
+      sight: (_, items) => clearestSight(items.filter((i) => i.shape === 'dot')),
       configuration: frame,
-      solution: ([x, y, z]) => pointWithDrop(x!, y!, z!, spec.frame),
+      solution: ([x, y, z]): SpaceItem[] => [
+        { shape: 'dot', at: [x!, y!, z!], layer: 'solution' },
+        { shape: 'stick', from: [x!, y!, -spec.frame], to: [x!, y!, z!], layer: 'depth' },
+      ],
     },
   };
 }

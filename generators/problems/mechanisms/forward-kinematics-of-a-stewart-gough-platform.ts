@@ -1,6 +1,6 @@
 import { defineProblem, type ComplexInput } from '../../../src/atlas/definition.ts';
-import type { FigureItem } from '../../../src/atlas/figure.ts';
-import { fitWindow } from '../shared/fit-window.ts';
+import type { SpaceItem } from '../../../src/atlas/space-figure.ts';
+import { clearestSight } from '../../../src/plots/clearest-sight.ts';
 import { genericInstance } from '../shared/generic-instance.ts';
 import { ENGINEERING_CAUTION } from '../shared/engineering-caution.ts';
 import { poseOfStudy, rotate, type Vector3 } from './study-pose.ts';
@@ -11,9 +11,6 @@ const axes = ['x', 'y', 'z'] as const;
 /** Base joint Aᵢ (floor frame) and platform joint Bᵢ (platform frame) of leg i, from the parameters. */
 const joint = (p: Readonly<Record<string, number>>, side: 'a' | 'b', i: number): Vector3 => axes.map((k) => p[`${side}${i}${k}`]!) as Vector3;
 
-/** Oblique parallel projection to the drawing plane: (x, y, z) ↦ (x − 0.45y, z − 0.3y). */
-const project = ([x, y, z]: Vector3): [number, number] => [x - 0.45 * y, z - 0.3 * y];
-
 /** The platform joints in the floor frame for a pose (t₁, t₂, t₃, e₁, e₂, e₃): t + R(e)·Bᵢ. */
 export function placedPlatform(values: readonly number[], p: Readonly<Record<string, number>>): Vector3[] {
   const [t1, t2, t3, ...e] = values;
@@ -23,10 +20,10 @@ export function placedPlatform(values: readonly number[], p: Readonly<Record<str
   });
 }
 
-function baseItems(p: Readonly<Record<string, number>>): FigureItem[] {
+function baseItems(p: Readonly<Record<string, number>>): SpaceItem[] {
   return [
-    { shape: 'polyline', points: legs.map((i) => project(joint(p, 'a', i))), closed: true, layer: 'given', label: 'base' },
-    ...legs.map((i): FigureItem => { const [x, y] = project(joint(p, 'a', i)); return { shape: 'point', x, y, layer: 'given', label: `base joint ${i}` }; }),
+    { shape: 'chain', points: legs.map((i) => joint(p, 'a', i)), closed: true, layer: 'given', label: 'base' },
+    ...legs.map((i): SpaceItem => ({ shape: 'dot', at: joint(p, 'a', i), layer: 'given', label: `base joint ${i}` })),
   ];
 }
 
@@ -114,14 +111,15 @@ export default defineProblem({
     },
   ],
   drawing: {
-    projection: 'An oblique parallel projection of space to the page, (x, y, z) ↦ (x − 0.45y, z − 0.3y): the base lies near the bottom and height goes up the page.',
-    window: (p, items) => fitWindow([...baseItems(p), ...(items ?? [])]),
+    kind: 'space',
+    projection: 'Each real pose is drawn as the seat\'s joint hexagon with its six legs from the base joints.',
+    sight: (_, items) => clearestSight(items.filter((i) => i.layer === 'legs')),
     configuration: baseItems,
-    solution: (values, p) => {
+    solution: (values, p): SpaceItem[] => {
       const placed = placedPlatform(values, p);
       return [
-        { shape: 'polyline', points: placed.map(project), closed: true, layer: 'solution', label: 'platform' },
-        ...placed.map((b, n): FigureItem => ({ shape: 'polyline', points: [project(joint(p, 'a', n + 1)), project(b)], closed: false, layer: 'legs', label: `leg ${n + 1}` })),
+        { shape: 'chain', points: placed, closed: true, layer: 'solution', label: 'platform' },
+        ...placed.map((b, n): SpaceItem => ({ shape: 'stick', from: joint(p, 'a', n + 1), to: b, layer: 'legs', label: `leg ${n + 1}` })),
       ];
     },
   },

@@ -1,11 +1,12 @@
 import { defineProblem, type ComplexInput } from '../../../src/atlas/definition.ts';
-import type { FigureItem } from '../../../src/atlas/figure.ts';
+import type { SpaceItem } from '../../../src/atlas/space-figure.ts';
+import { clearestSight } from '../../../src/plots/clearest-sight.ts';
 import { coefficientNames, monomialExponents } from '../shared/monomials.ts';
 import { substitute } from '../shared/univariate.ts';
 import type { PlaneWindow } from '../shared/contour.ts';
 import { planeCurveItems } from '../shared/plane-curve-items.ts';
 import { genericInstance } from '../shared/generic-instance.ts';
-import { clipLine } from '../shared/segment.ts';
+import { boxEdges, clipToBox } from '../shared/space-box.ts';
 import { coefficientsOf, linearForm, product, scale, sum } from '../shared/numeric-polynomial.ts';
 
 const exponents = monomialExponents(3, 3);
@@ -26,8 +27,13 @@ function sumOfCubes(clebsch: boolean): Record<string, ComplexInput> {
   return Object.fromEntries(coefficientsOf(sum(...all.map((f) => product(f, f, f))), exponents).map((c, m) => [names[m]!, c]));
 }
 
-/** The section of the surface by the plane z = 0 (the terms without z). */
-const slice = (q: Readonly<Record<string, number>>): FigureItem[] => planeCurveItems(q, names, exponents, view, 'section by the plane z = 0');
+/** Half the side of the cube the lines are drawn in (the section's square is its middle). */
+const HALF = 4;
+
+/** The section of the surface by the plane z = 0 (the terms without z), as chains of 3-space in that plane. */
+const slice = (q: Readonly<Record<string, number>>): SpaceItem[] =>
+  planeCurveItems(q, names, exponents, view, 'section by the plane z = 0').flatMap((item): SpaceItem[] =>
+    item.shape === 'polyline' ? [{ shape: 'chain', points: item.points.map(([x, y]) => [x, y, 0] as [number, number, number]), closed: item.closed, layer: item.layer, label: 'section by the plane z = 0' }] : []);
 
 export default defineProblem({
   slug: 'lines-on-a-cubic-surface',
@@ -93,13 +99,13 @@ export default defineProblem({
     },
   ],
   drawing: {
-    projection: 'Each line of the surface is drawn by its orthogonal projection onto the plane z = 0 (along the z-axis); the curve is the section of the surface by that plane.',
-    window: () => view,
-    configuration: slice,
+    kind: 'space',
+    projection: 'Each real line of the surface is drawn where it crosses the cube from −4 to 4 on every axis (edges dashed), over the section of the surface by the plane z = 0.',
+    sight: (_, items) => clearestSight(items.filter((i) => i.layer === 'solution')),
+    configuration: (q) => [...boxEdges(HALF, 'construction', 'the cube from −4 to 4'), ...slice(q)],
     solution: ([a, b, c, d]) => {
-      const segment = clipLine(a!, b!, c!, d!, view);
-      if (segment) return [{ shape: 'polyline', points: segment, closed: false, layer: 'solution' }];
-      return Math.hypot(c!, d!) < 1e-12 ? [{ shape: 'point', x: a!, y: b!, layer: 'solution' }] : [];
+      const ends = clipToBox([a!, b!, 0], [c!, d!, 1], HALF);
+      return ends ? [{ shape: 'stick', from: ends[0], to: ends[1], layer: 'solution' }] : [];
     },
   },
 });

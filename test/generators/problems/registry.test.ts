@@ -6,6 +6,8 @@ import { systemOf } from '../../../src/atlas/system-of.ts';
 import { parametersOf } from '../../../src/atlas/parameters-of.ts';
 import { countSourceSchema } from '../../../src/atlas/source.ts';
 import { figureItemSchema } from '../../../src/atlas/figure.ts';
+import { sightSchema, spaceItemSchema } from '../../../src/atlas/space-figure.ts';
+import { isSpaceDrawing } from '../../../src/atlas/definition.ts';
 import { degree, multihomogeneousBound } from '../../../src/engine/index.ts';
 
 // The Bézout bound of each formulation, product of the equation degrees read off the graph. These are our own
@@ -76,6 +78,12 @@ describe('the problem registry', () => {
       if (!definition.drawing) return;
       for (const demo of definition.instances.filter((i) => i.kind === 'demo')) {
         const p = Object.fromEntries(Object.entries(demo.parameters ?? {}).map(([k, v]) => [k, typeof v === 'number' ? v : v[0]]));
+        if (isSpaceDrawing(definition.drawing)) {
+          const items = definition.drawing.configuration(p);
+          for (const item of items) expect(spaceItemSchema.safeParse(item).success).toBe(true);
+          expect(sightSchema.safeParse(definition.drawing.sight(p, items)).success).toBe(true);
+          continue;
+        }
         const items = definition.drawing.configuration(p);
         for (const item of items) expect(figureItemSchema.safeParse(item).success).toBe(true);
         const w = definition.drawing.window(p, items);

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import definition from '../../../../generators/problems/circles/circles-tangent-to-three-circles.ts';
 import { systemOf } from '../../../../src/atlas/system-of.ts';
 import { evaluate, real } from '../shared/evaluate.ts';
-import { drawnRealSolutions, demoInstance, randomInstance, seeds, solveInstance, worstResidual } from '../shared/solve.ts';
+import { drawnRealSolutions, demoInstance, planeDrawing, randomInstance, seeds, solveInstance, worstResidual } from '../shared/solve.ts';
 
 const demo = definition.instances.find((i) => i.id === 'three-ponds')!;
 const p = demo.parameters as Record<string, number>;
@@ -62,7 +62,7 @@ describe('circles tangent to three circles (Apollonius)', () => {
 
   it('fits the window around the given circles and all solution circles', () => {
     const items = reference.map((c) => ({ shape: 'circle' as const, cx: c.x, cy: c.y, r: c.R, layer: 'solution' }));
-    const w = definition.drawing!.window(p, items);
+    const w = planeDrawing(definition).window(p, items);
     for (const c of reference) {
       expect(c.x - c.R).toBeGreaterThanOrEqual(w.xMin);
       expect(c.x + c.R).toBeLessThanOrEqual(w.xMax);

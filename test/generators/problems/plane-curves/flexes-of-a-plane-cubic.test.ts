@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import definition from '../../../../generators/problems/plane-curves/flexes-of-a-plane-cubic.ts';
 import { systemOf } from '../../../../src/atlas/system-of.ts';
 import { evaluate, paramsFrom, real } from '../shared/evaluate.ts';
-import { drawnRealSolutions, demoInstance, randomInstance, seeds, solveInstance, worstResidual } from '../shared/solve.ts';
+import { drawnRealSolutions, demoInstance, planeDrawing, randomInstance, seeds, solveInstance, worstResidual } from '../shared/solve.ts';
 
 const system = systemOf(definition);
 // The Fermat cubic x³ + y³ + 1 = 0: its flexes are the 9 points with one homogeneous coordinate 0, e.g. (−1, 0)
@@ -40,7 +40,7 @@ describe('solving flexes of a plane cubic', () => {
     const solved = await solveInstance(definition, demoInstance(definition, 'toy-railway'));
     expect(solved.report.solutions).toHaveLength(9);
     expect(solved.real).toBe(3);
-    const view = definition.drawing!.window({});
+    const view = planeDrawing(definition).window({});
     for (const [item] of drawnRealSolutions(definition, demoInstance(definition, 'toy-railway'), solved)) {
       const { x, y } = item as { x: number; y: number };
       expect(x > view.xMin && x < view.xMax && y > view.yMin && y < view.yMax).toBe(true);

@@ -1,9 +1,10 @@
-import type { InstanceDefinition, ProblemDefinition } from '../../../../src/atlas/definition.ts';
+import { isSpaceDrawing, type DrawingDefinition, type InstanceDefinition, type ProblemDefinition } from '../../../../src/atlas/definition.ts';
 import { systemOf } from '../../../../src/atlas/system-of.ts';
 import { parametersOf } from '../../../../src/atlas/parameters-of.ts';
 import { type SolveReport, solveSystem } from '../../../../src/engine/index.ts';
 import { coordinatesOf, isRealValues } from '../../../../generators/pipeline/coordinates-of.ts';
 import { figureItemSchema, type FigureItem } from '../../../../src/atlas/figure.ts';
+import { spaceItemSchema, type SpaceItem } from '../../../../src/atlas/space-figure.ts';
 
 /** A solve of one instance with the problem's own start system, and the real count judged in its coordinates. */
 export interface SolvedInstance {
@@ -51,16 +52,24 @@ export function splitSeeds(all: readonly number[], engineIssues: readonly number
  * The drawing of every real solution of a solved demo instance (real parts of its stored coordinates, as the
  * writer draws them), each item checked against the figure schema; throws naming the problem on a bad item.
  */
-export function drawnRealSolutions(definition: ProblemDefinition, instance: InstanceDefinition, solved: SolvedInstance): FigureItem[][] {
+export function drawnRealSolutions(definition: ProblemDefinition, instance: InstanceDefinition, solved: SolvedInstance): (FigureItem | SpaceItem)[][] {
   const params = Object.fromEntries(Object.entries(instance.parameters ?? {}).map(([k, v]) => [k, typeof v === 'number' ? v : v[0]]));
   return solved.report.solutions
     .map((s) => coordinatesOf(definition, s.point, definition.slug))
     .filter((values) => isRealValues(values))
     .map((values) => {
       const items = definition.drawing!.solution(Array.from(values).filter((_, i) => i % 2 === 0), params);
-      for (const item of items) if (!figureItemSchema.safeParse(item).success) throw new Error(`${definition.slug}: bad figure item ${JSON.stringify(item)}`);
+      const schema = isSpaceDrawing(definition.drawing!) ? spaceItemSchema : figureItemSchema;
+      for (const item of items) if (!schema.safeParse(item).success) throw new Error(`${definition.slug}: bad figure item ${JSON.stringify(item)}`);
       return items;
     });
+}
+
+/** A definition's plane drawing; throws naming the problem when it has none or draws in 3-space. */
+export function planeDrawing(definition: ProblemDefinition): DrawingDefinition {
+  const drawing = definition.drawing;
+  if (!drawing || isSpaceDrawing(drawing)) throw new Error(`${definition.slug}: no plane drawing`);
+  return drawing;
 }
 
 /** The largest residual ‖F(x)‖∞ / (1 + ‖x‖∞) over a report's found solutions (0 when none): every found solution must solve. */

@@ -45,10 +45,19 @@ describe('lines on a cubic surface: the formulation', () => {
     expect(largestResidual(system.equations, real([0.1, 0.2, 0.3, 0.4]), params)).toBeGreaterThan(1e-3);
   });
 
-  it('draws a line as a segment clipped to the view', () => {
-    const items = definition.drawing!.solution([0, 0, 1, 1], {});
+  it.each([
+    ['the diagonal through the origin', [0, 0, 1, 1], [[-4, -4, -4], [4, 4, 4]]],
+    ['a line crossing z = 0 at (1, 2) along (0.5, −0.25, 1)', [1, 2, 0.5, -0.25], [[-1, 3, -4], [3, 1, 4]]],
+  ] as const)('draws %s as a stick cut at the faces of the cube [−4, 4]³', (_, chart, ends) => {
+    const items = definition.drawing!.solution(chart, {});
     expect(items).toHaveLength(1);
-    expect(items[0]!.shape).toBe('polyline');
+    const stick = items[0]!;
+    if (stick.shape !== 'stick') throw new Error(`expected a stick, got ${stick.shape}`);
+    [stick.from, stick.to].forEach((p, i) => p.forEach((v, k) => expect(v).toBeCloseTo(ends[i]![k]!, 12)));
+  });
+
+  it('draws nothing for a line that misses the cube', () => {
+    expect(definition.drawing!.solution([30, 0, 0, 0], {})).toEqual([]);
   });
 });
 
@@ -79,8 +88,8 @@ describe('solving lines on a cubic surface', () => {
     const solved = await solveInstance(definition, demo);
     expect(solved.report.solutions).toHaveLength(27);
     expect(solved.real).toBe(27);
-    // Every real line crosses the drawing's view.
-    expect(drawnRealSolutions(definition, demo, solved).map((items) => items.filter((i) => i.shape === 'polyline').length)).toEqual(new Array(27).fill(1));
+    // Every real line crosses the cube the figure draws.
+    expect(drawnRealSolutions(definition, demo, solved).map((items) => items.filter((i) => i.shape === 'stick').length)).toEqual(new Array(27).fill(1));
   });
 
   it('the Fermat model: 27 lines, exactly 3 real (the least possible, Schläfli 1863)', async () => {
