@@ -1,10 +1,10 @@
 import type { Sink } from './context.ts';
 
 /**
- * Progress of path tracking on stderr: on a terminal one line rewritten with \r (paths done, percent, ETA from the
+ * Progress on stderr (of path tracking by default, else of the given unit): on a terminal one line rewritten with \r (paths done, percent, ETA from the
  * mean rate so far, at most 10 updates a second); otherwise a plain line at every 10 % step. `finish` ends the line.
  */
-export function createProgress(sink: Sink, now: () => number) {
+export function createProgress(sink: Sink, now: () => number, unit = 'paths') {
   let label = '';
   let started = 0;
   let lastDraw = 0;
@@ -23,12 +23,12 @@ export function createProgress(sink: Sink, now: () => number) {
         if (t - lastDraw < 100 && done < total) return;
         lastDraw = t;
         const eta = done > 0 && done < total ? ` · ETA ${duration(((t - started) / done) * (total - done))}` : '';
-        sink.write(`\r${label}: ${done}/${total} paths (${Math.floor(fraction * 100)}%)${eta}\u001b[K`);
+        sink.write(`\r${label}: ${done}/${total} ${unit} (${Math.floor(fraction * 100)}%)${eta}\u001b[K`);
       } else {
         const decile = Math.floor(fraction * 10);
         if (decile === lastDecile) return;
         lastDecile = decile;
-        sink.write(`${label}: ${done}/${total} paths (${Math.floor(fraction * 100)}%)\n`);
+        sink.write(`${label}: ${done}/${total} ${unit} (${Math.floor(fraction * 100)}%)\n`);
       }
     },
     finish(): void {

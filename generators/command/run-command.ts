@@ -2,6 +2,7 @@ import { AtlasError } from '../pipeline/atlas-error.ts';
 import { checkCommand } from './check-command.ts';
 import type { CommandContext } from './context.ts';
 import { EXIT, exitCodeOf } from './exit-codes.ts';
+import { exploreCommand } from './explore-command.ts';
 import { mergeCommand } from './merge-command.ts';
 import { refreshCommand } from './refresh-command.ts';
 import { regenerateCommand } from './regenerate-command.ts';
@@ -13,6 +14,7 @@ const COMMANDS: Record<string, (args: readonly string[], ctx: CommandContext) =>
   refresh: refreshCommand,
   check: checkCommand,
   merge: mergeCommand,
+  explore: exploreCommand,
 };
 
 /** The command's help text: every subcommand with its options, and the exit codes. */
@@ -27,6 +29,9 @@ export const HELP = `usage: node --experimental-strip-types generators/cli.ts <c
                                             dependent job; wait showing parts written, or --detach: print job ids
   refresh [--workers N]                     regenerate only stale problems (npm start runs this)
   check                                     validate every content file and every definition
+  explore <slug | path> [--samples N] [--climb N] [--seed N]
+                                            real counts over random real instances and a climb toward more
+                                            real solutions; writes content/explorations/<slug>.json
   merge <part.json>… [--json] [--force] [--record-file FILE] [--unpublished]
                                             merge shard parts into one record and write it
 

@@ -8,11 +8,13 @@ import { displayPath } from '../pipeline/load-definition.ts';
 import { pagePath, recordPath } from './content-paths.ts';
 import { readFrontmatter, renderPage } from './render-page.ts';
 import { checkSidecars } from './check-sidecars.ts';
+import { checkExplorations } from './check-explorations.ts';
 
 /**
  * Every problem with content under the root, checked: each record parses and fits the schema with the slug of its
  * file name; each page's frontmatter fits its schema and the page is exactly what its record renders to; no page
- * lacks a record and no record lacks a page; the files beside the records agree with them (checkSidecars). Returns
+ * lacks a record and no record lacks a page; the files beside the records agree with them (checkSidecars); every
+ * exploration fits its schema and has a record (checkExplorations). Returns
  * one message per problem (file, field path, why) and the slugs.
  */
 export function checkContent(root: string): { errors: string[]; slugs: string[] } {
@@ -38,6 +40,7 @@ export function checkContent(root: string): { errors: string[]; slugs: string[] 
   }
   for (const slug of records.keys()) if (!pages.includes(slug)) errors.push(`${displayPath(recordPath(root, slug))}: has no page ${displayPath(pagePath(root, slug))} (run refresh)`);
   errors.push(...checkSidecars(root, records));
+  errors.push(...checkExplorations(root, records));
   return { errors, slugs: [...records.keys()] };
 }
 

@@ -25,3 +25,8 @@ export function systemsPath(root: string, slug: string): string {
 export function certificatesPath(root: string, slug: string): string {
   return join(root, 'certificates', `${slug}.json`);
 }
+
+/** Where a problem's real-solution exploration lives: <root>/explorations/<slug>.json. */
+export function explorationPath(root: string, slug: string): string {
+  return join(root, 'explorations', `${slug}.json`);
+}

@@ -1,5 +1,6 @@
 import { z } from 'astro/zod';
 import { publishedGroupSchema } from './published-group.ts';
+import { realMaximumSchema } from './exploration.ts';
 import { countSourceSchema } from './source.ts';
 import { ladderMembershipSchema } from './ladder-membership.ts';
 import { SLUG_PATTERN, describeValue } from './slug.ts';
@@ -42,6 +43,7 @@ export const definitionSchema = z.object({
   excessNote: text,
   caution: text.optional(),
   publishedGroup: publishedGroupSchema.optional(),
+  realMaximum: realMaximumSchema.optional(),
   instances: z
     .array(
       z.object({

@@ -1,6 +1,7 @@
 import type { ExprNode, exprBuilders as ExprOps, ParameterProblem, PolynomialSystem } from '../engine/index.ts';
 import type { CountSource } from './source.ts';
 import type { PublishedGroup } from './published-group.ts';
+import type { RealMaximum } from './exploration.ts';
 import type { FigureItem } from './figure.ts';
 import type { Sight, SpaceItem } from './space-figure.ts';
 import type { LadderMembership } from './ladder-membership.ts';
@@ -109,6 +110,8 @@ export interface ProblemDefinition {
   readonly caution?: string;
   /** The published monodromy (Galois) group of the solutions, shown beside the one random loops generate, or omitted. */
   readonly publishedGroup?: PublishedGroup;
+  /** The published largest number of real solutions (or a published instance reaching it), shown beside the explorer's best. */
+  readonly realMaximum?: RealMaximum;
   readonly instances: readonly InstanceDefinition[];
   /** Defaults to total degree. */
   readonly solver?: SolverChoice;

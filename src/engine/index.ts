@@ -48,3 +48,4 @@ export { multiplyComplex } from './certify/complex-inverse.ts';
 // Monodromy groups (issue 12): loop permutations of a solution set and what group they generate.
 export { monodromyPermutations, type MonodromyLoopOptions, type MonodromyLoopsReport, type LoopOutcome } from './complete/monodromy-permutations.ts';
 export { describeGroup, EXACT_ORDER_LIMIT, type GroupDescription, type GroupVerdict } from './galois/describe-group.ts';
+export { carrySolutions, type CarriedSolutions } from './complete/carry-solutions.ts';

@@ -57,6 +57,7 @@ export default defineProblem({
       note: 'They count 2^(n+1) hyperspheres tangent to n + 1 general ones by Bézout in the space of coefficients (volume, issue and pages checked on the article’s first page). That the planar construction goes back to Viète’s restoration of Apollonius’s lost book on tangencies (Apollonius Gallus, Paris, 1600) is as historical accounts of the problem give it; Viète’s text was not read.',
     },
   },
+  realMaximum: { value: 8, citation: 'all eight are real for three mutually exterior circles of distinct radii, classical since Apollonius (from memory)' },
   excessNote: [
     'None: the three tangency quadrics meet in exactly $8$ points of the projective space of circle equations, none of them at infinity, for general data.',
     'Excess appears only in other coordinates: with centre $(x, y)$ and radius $R$, the two kinds of contact $|c - (a, b)| = R \\pm r$ combine into one quartic per given circle, so the naive count is $4^3 = 64$, and each circle is found twice (radius $\\pm R$).',

@@ -63,6 +63,7 @@ export function planeCurveDistanceProblem(spec: PlaneCurveDistanceSpec): Problem
         note: `A general hypersurface of degree d in n-space has Euclidean distance degree d·((d − 1)ⁿ − 1)/(d − 2) (for d = 2: 2n); for a plane curve (n = 2) this is d², ${d * d} for d = ${d}. Volume, issue, pages and DOI as the publisher’s page for the article gives them. The formula is as we recall the paper’s statement on general hypersurfaces; the proposition and page that state it were not re-read.`,
       },
     },
+    realMaximum: { value: d * d, citation: `J. Draisma, E. Horobeț, G. Ottaviani, B. Sturmfels, R. R. Thomas, Found. Comput. Math. 16 (2016): the Euclidean distance degree ${d * d} of a general plane curve of degree ${d} bounds its real critical points; that the bound is reached for every d is from memory` },
     excessNote: `None for general data. At infinity the two equations share a point only where the curve meets the line at infinity in one of the isotropic points $(1 : \\pm i : 0)$, or touches that line; a general curve does neither, so all $${d * d}$ paths of the total-degree homotopy end at finite critical points. Special curves lose solutions there: a circle passes through both isotropic points, and its Euclidean distance degree drops from $4$ to $2$.`,
     instances: [
       genericInstance(`A random complex curve and point`, spec.genericSeed, `All ${names.length} coefficients and the point (a, b)`),

@@ -57,6 +57,7 @@ export function curvePairProblem(spec: CurvePairSpec): ProblemDefinition {
       },
     },
     publishedGroup: { name: `${symmetricGroupName(d * d)}, the full symmetric group`, order: factorialDigits(d * d), citation: 'J. Harris, Galois groups of enumerative problems, Duke Math. J. 46 (1979) 685–724' },
+    realMaximum: { value: d * d, citation: `common practice: two real curves that are each a product of ${d} real lines in general position meet in ${d * d} real points, and a small real perturbation keeps them` },
     excessNote: `None: for general coefficients the two curves meet transversally in exactly $${d * d}$ finite points, so every path of the total-degree homotopy ends at a distinct solution.`,
     instances: [
       genericInstance(`Two random complex ${spec.noun}s`, spec.genericSeed, 'All coefficients'),

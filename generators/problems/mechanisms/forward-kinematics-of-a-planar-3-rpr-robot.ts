@@ -89,6 +89,7 @@ export default defineProblem({
       note: 'Their abstract (read in the 1993 manuscript) states that the direct kinematic problem of the general planar three-degree-of-freedom parallel manipulator reduces to a polynomial of degree 6, found by several researchers independently, among them Gosselin, Sefrioui and Richard (Mechanism and Machine Theory, early 1990s). Volume, issue and pages as a reference list that cites the article gives them; no DOI was found. That Hunt showed six assembly modes is as L. Rolland’s survey of the kinematics of parallel manipulators says (doi 10.5772/5431); from memory, not re-read: the year of Hunt’s paper, 1983, and that all six can be real.',
     },
   },
+  realMaximum: { value: 6, citation: 'all six assembly modes can be real (K. H. Hunt, 1983; C. Gosselin, J. Sefrioui, M. J. Richard 1994; from memory)' },
   excessNote: [
     'The $16 - 6 = 10$ surplus paths go to infinity. Homogenise with a new coordinate $h$: at $h = 0$ the circle and the rotation condition become $x^2 + y^2 = 0$ and $c^2 + s^2 = 0$, so each of $(x, y)$ and $(c, s)$ is zero or points along an isotropic direction $(1, \\pm i)$,',
     'and the bilinear parts of the other two equations, $2(x, y) \\cdot R(c, s) B_i$, vanish for general data exactly when one of the two is zero or both directions carry the same sign.',

@@ -79,6 +79,7 @@ export default defineProblem({
       note: 'They review the direct solutions from Grunert (1841) on, each of which reduces the problem to a polynomial of degree four, so at most four poses. Issue, pages and DOI as several reference lists that cite the article give them. From memory, not re-read: that all four can be real and in front of the camera, with such a configuration given by Fischler and Bolles (Communications of the ACM 24(6), 1981, 381–395, doi 10.1145/358669.358692, as reference lists give them).',
     },
   },
+  realMaximum: { value: 4, citation: 'all four poses can be real (R. M. Haralick et al., IJCV 13, 1994; from memory)' },
   excessNote: [
     'None in the formulation shown: two conics in the depth ratios meet in $4$ points, none at infinity for general data (at infinity the quadratic parts $d_{12}(u^2 q_{22} - 2uv q_{23} + v^2 q_{33}) - d_{23}u^2 q_{22}$ and $d_{12}v^2 q_{33} - d_{13}u^2 q_{22}$ have no common root).',
     'The naive count lives in the depths: there the Bézout bound $8$ is attained too, but every pose is counted twice, once with each sign of the depths, the second copy being the mirror image through the camera centre with all markers behind it.',

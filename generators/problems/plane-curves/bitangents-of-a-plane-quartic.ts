@@ -100,6 +100,7 @@ export default defineProblem({
     },
   },
   publishedGroup: { name: 'Sp(6, 2), the symplectic group over the field of two elements', order: '1451520', citation: 'C. Jordan, Traité des substitutions et des équations algébriques, Gauthier-Villars, Paris 1870; J. Harris, Galois groups of enumerative problems, Duke Math. J. 46 (1979) 685–724' },
+  realMaximum: { value: 28, citation: 'J. Plücker, Theorie der algebraischen Curven, Bonn 1839: a quartic of four ovals has all 28 bitangents real; real counts 28, 16, 8, 4 (Zeuthen 1873)' },
   excessNote: [
     'The naive counts, $1080$ (total degree) and $288$ (two-homogeneous), far exceed $28$; the surplus lies at infinity of the charts.',
     'When $q_4(m) = 0$ the line runs in an asymptotic direction of the curve, $q$ drops degree, and $q = q_4\\,(t^2 + \\alpha t + \\beta)^2$ can only be met in the limit with $\\alpha$ or $\\beta$ infinite;',

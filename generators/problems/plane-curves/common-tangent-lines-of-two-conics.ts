@@ -67,6 +67,7 @@ export default defineProblem({
       note: 'Bézout’s theorem for plane curves, applied in the dual plane: the tangent lines of a smooth conic form a conic there (its equation is the adjugate matrix), and two general conics meet in 4 points. The duality step is classical (Poncelet, Plücker; from memory).',
     },
   },
+  realMaximum: { value: 4, citation: 'common practice: two disjoint real ellipses, each outside the other, have four real common tangents' },
   excessNote: 'None: the two dual conics meet transversally in $4$ points of the dual plane, and for general conics none of the common tangents passes through the origin, the one line of the chart’s complement where solutions could hide. In special position the count drops by coincidence: two conics tangent to each other share that tangent twice.',
   instances: [
     genericInstance('Two random complex conics', 20261107, 'All 12 coefficients'),

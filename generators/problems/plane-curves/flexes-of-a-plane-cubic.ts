@@ -48,6 +48,7 @@ export default defineProblem({
     },
   },
   publishedGroup: { name: 'the affine special linear group of (Z/3)², order 9 · 24', order: '216', citation: 'J. Harris, Galois groups of enumerative problems, Duke Math. J. 46 (1979) 685–724 (the section from memory)' },
+  realMaximum: { value: 3, citation: 'F. Klein, Math. Ann. 10 (1876): at most d(d − 2) = 3 real flexes, and a real smooth cubic has exactly three (from memory)' },
   excessNote: 'None: for a general cubic the curve and its Hessian meet transversally in $9$ points, all in the affine chart.',
   instances: [
     genericInstance('A random complex cubic', 20260107, 'All 10 coefficients'),

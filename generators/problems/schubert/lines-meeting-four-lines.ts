@@ -71,6 +71,7 @@ export default defineProblem({
     },
   },
   publishedGroup: { name: 'S₂, the full symmetric group', order: '2', citation: 'J. Harris, Galois groups of enumerative problems, Duke Math. J. 46 (1979) 685–724' },
+  realMaximum: { value: 2, citation: 'common practice: four lines of one ruling of a real hyperboloid of one sheet are met by every line of the other ruling; moved off it, two real lines remain' },
   excessNote: [
     'The total-degree homotopy tracks $4$ paths; the $2$ extra ones go to infinity in the plane of $(s, t)$, to the points where $s$ or $t$ alone is infinite:',
     'each equation is $c_0 + c_1 s + c_2 t + c_3 st$, whose top-degree part $st$ vanishes at two points at infinity common to both equations.',

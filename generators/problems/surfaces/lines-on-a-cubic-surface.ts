@@ -74,6 +74,7 @@ export default defineProblem({
     },
   },
   publishedGroup: { name: 'W(E₆), the Weyl group of E₆', order: '51840', citation: 'C. Jordan, Traité des substitutions et des équations algébriques, Gauthier-Villars, Paris 1870; J. Harris, Galois groups of enumerative problems, Duke Math. J. 46 (1979) 685–724' },
+  realMaximum: { value: 27, citation: 'L. Schläfli, Phil. Trans. R. Soc. London 153 (1863): a smooth real cubic surface has 27, 15, 7 or 3 real lines' },
   excessNote: [
     'The $81 - 27 = 54$ surplus paths go to infinity. Homogenise the chart with a new coordinate $h$: at $h = 0$ only the cubic part $f_3$ of $f$ survives,',
     'and the four equations say that $f_3(\\lambda(a, b) + \\mu(c, d), 0)$ vanishes for all $\\lambda, \\mu$. For a general surface that forces $(a, b)$ and $(c, d)$ to be proportional to one of the three roots of the binary cubic $f_3(x, y, 0)$:',
