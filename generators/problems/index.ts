@@ -25,6 +25,7 @@ import flexesOfAPlaneQuintic from './plane-curves/flexes-of-a-plane-quintic.ts';
 import singularCubics from './plane-curves/singular-members-of-a-pencil-of-cubics.ts';
 import singularQuartics from './plane-curves/singular-members-of-a-pencil-of-quartics.ts';
 import singularQuintics from './plane-curves/singular-members-of-a-pencil-of-quintics.ts';
+import singularSextics from './plane-curves/singular-members-of-a-pencil-of-sextics.ts';
 import tangentLinesFromAPointToAQuartic from './plane-curves/tangent-lines-from-a-point-to-a-quartic.ts';
 import commonTangentLinesOfTwoConics from './plane-curves/common-tangent-lines-of-two-conics.ts';
 import commonTangentLinesOfTwoCubics from './plane-curves/common-tangent-lines-of-two-cubics.ts';
@@ -70,6 +71,7 @@ export const problems: readonly ProblemDefinition[] = [
   singularCubics,
   singularQuartics,
   singularQuintics,
+  singularSextics,
   tangentLinesFromAPointToAQuartic,
   commonTangentLinesOfTwoConics,
   commonTangentLinesOfTwoCubics,
