@@ -27,6 +27,7 @@ import singularQuartics from './plane-curves/singular-members-of-a-pencil-of-qua
 import singularQuintics from './plane-curves/singular-members-of-a-pencil-of-quintics.ts';
 import singularSextics from './plane-curves/singular-members-of-a-pencil-of-sextics.ts';
 import tangentLinesFromAPointToAQuartic from './plane-curves/tangent-lines-from-a-point-to-a-quartic.ts';
+import tangentLinesFromAPointToAQuintic from './plane-curves/tangent-lines-from-a-point-to-a-quintic.ts';
 import commonTangentLinesOfTwoConics from './plane-curves/common-tangent-lines-of-two-conics.ts';
 import commonTangentLinesOfTwoCubics from './plane-curves/common-tangent-lines-of-two-cubics.ts';
 import pointsCommonToThreeQuadricSurfaces from './intersections/points-common-to-three-quadric-surfaces.ts';
@@ -73,6 +74,7 @@ export const problems: readonly ProblemDefinition[] = [
   singularQuintics,
   singularSextics,
   tangentLinesFromAPointToAQuartic,
+  tangentLinesFromAPointToAQuintic,
   commonTangentLinesOfTwoConics,
   commonTangentLinesOfTwoCubics,
   pointsCommonToThreeQuadricSurfaces,
