@@ -20,6 +20,7 @@ import linesMeetingEight3PlanesIn5Space from './schubert/lines-meeting-eight-3-p
 import planesMeetingNinePlanesIn5Space from './schubert/planes-meeting-nine-planes-in-5-space.ts';
 import flexesOfAPlaneCubic from './plane-curves/flexes-of-a-plane-cubic.ts';
 import bitangentsOfAPlaneQuartic from './plane-curves/bitangents-of-a-plane-quartic.ts';
+import bitangentsOfAPlaneQuintic from './plane-curves/bitangents-of-a-plane-quintic.ts';
 import flexesOfAPlaneQuartic from './plane-curves/flexes-of-a-plane-quartic.ts';
 import flexesOfAPlaneQuintic from './plane-curves/flexes-of-a-plane-quintic.ts';
 import singularCubics from './plane-curves/singular-members-of-a-pencil-of-cubics.ts';
@@ -67,6 +68,7 @@ export const problems: readonly ProblemDefinition[] = [
   planesMeetingNinePlanesIn5Space,
   flexesOfAPlaneCubic,
   bitangentsOfAPlaneQuartic,
+  bitangentsOfAPlaneQuintic,
   flexesOfAPlaneQuartic,
   flexesOfAPlaneQuintic,
   singularCubics,
