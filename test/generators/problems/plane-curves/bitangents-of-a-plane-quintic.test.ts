@@ -34,9 +34,16 @@ describe('solving bitangents of a plane quintic', () => {
     expect(report.stats.atInfinity + report.stats.singular).toBe(2280);
   };
   const title = 'random complex quintic %i: 120 bitangents, every other path at or near infinity';
-  // Seed 1 fails through an engine issue: 119 bitangents; the 120th, (m, k) ≈ (−21.4 − 41.6i, 31.3 + 28.9i), lies
-  // near the chart's missing direction, with condition 2.5e12, and its path is called 'excess' after the double-double re-track.
-  const { checked, skipped } = splitSeeds([1, 2, 3], [1]);
+  // Seeds 1 … 7 were solved once: 2, 3, 5 and 6 give all 120; 1, 4 and 7 give 119 (kept here as skipped cases).
+  // Seed 1: the 120th, (m, k) ≈ (−21.4 − 41.6i, 31.3 + 28.9i), lies near the line chart's missing direction, with
+  // condition 2.5e12, and its path is called 'excess' after the double-double re-track.
+  // Seed 4: the 120th has one point of contact near the line at infinity of the plane, α ≈ 2.5e5 + 4.0e3i and
+  // β ≈ −3.4e3 − 2.5e4i at (m, k) ≈ (0.25 + 1.39i, 2.70 + 1.79i); its path is called 'at infinity' (with path seed 99
+  // it ends as a singular end, residual 2.7e-8). Random projective charts on the line and on the contact
+  // quadratic would avoid both kinds (not done).
+  // Seed 7: not diagnosed.
+  // Seeds 5 and 6 pass but are left out to keep this file near a minute.
+  const { checked, skipped } = splitSeeds([1, 2, 3, 4, 7], [1, 4, 7]);
   it.each(checked)(title, check);
-  it.skip.each(skipped)(`${title} (engine issue)`, check);
+  it.skip.each(skipped)(`${title} (a bitangent at a chart's edge, see above)`, check);
 });
