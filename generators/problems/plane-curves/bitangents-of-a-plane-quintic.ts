@@ -27,7 +27,7 @@ export default defineProblem(bitangentProblem({
   genericSeed: 20261207,
   realNote: 'Each bitangent meets the quintic in one further point, where it crosses the curve.',
   bounds: { bezout: 21504, multihomogeneous: 2400 },
-  measuredExcess: 'In our run on the generic instance all $2280$ surplus paths of the multihomogeneous start end at infinity; the record counts them. The charts have a price: on three of seven further random quintics one bitangent of the $120$ was lost. In one it lay near the line chart’s missing direction, in another it touched the curve near the line at infinity ($\\alpha \\approx 2.5 \\cdot 10^5$), and its path was taken for one ending on a positive-dimensional set or at infinity; the third was not examined.',
+  measuredExcess: 'In our run on the generic instance all $2280$ surplus paths of the multihomogeneous start end at infinity; the record counts them. Not every run is so clean: on three of seven further random quintics one bitangent of the $120$ was lost, and its path was taken for one ending on a positive-dimensional set or at infinity. In one the lost bitangent lay near the line chart’s missing direction; in another it touched the curve near the line at infinity ($\\alpha \\approx 2.5 \\cdot 10^5$), and it stayed lost when, in a trial, a random point of each line took the place of its point at infinity; the third was not examined.',
   view: { xMin: -3.4, xMax: 3.4, yMin: -3.4, yMax: 3.4 },
   demo: {
     id: 'neon-sign',
