@@ -20,12 +20,15 @@ import linesMeetingEight3PlanesIn5Space from './schubert/lines-meeting-eight-3-p
 import planesMeetingNinePlanesIn5Space from './schubert/planes-meeting-nine-planes-in-5-space.ts';
 import flexesOfAPlaneCubic from './plane-curves/flexes-of-a-plane-cubic.ts';
 import bitangentsOfAPlaneQuartic from './plane-curves/bitangents-of-a-plane-quartic.ts';
+import bitangentsOfAPlaneQuintic from './plane-curves/bitangents-of-a-plane-quintic.ts';
 import flexesOfAPlaneQuartic from './plane-curves/flexes-of-a-plane-quartic.ts';
 import flexesOfAPlaneQuintic from './plane-curves/flexes-of-a-plane-quintic.ts';
 import singularCubics from './plane-curves/singular-members-of-a-pencil-of-cubics.ts';
 import singularQuartics from './plane-curves/singular-members-of-a-pencil-of-quartics.ts';
 import singularQuintics from './plane-curves/singular-members-of-a-pencil-of-quintics.ts';
+import singularSextics from './plane-curves/singular-members-of-a-pencil-of-sextics.ts';
 import tangentLinesFromAPointToAQuartic from './plane-curves/tangent-lines-from-a-point-to-a-quartic.ts';
+import tangentLinesFromAPointToAQuintic from './plane-curves/tangent-lines-from-a-point-to-a-quintic.ts';
 import commonTangentLinesOfTwoConics from './plane-curves/common-tangent-lines-of-two-conics.ts';
 import commonTangentLinesOfTwoCubics from './plane-curves/common-tangent-lines-of-two-cubics.ts';
 import pointsCommonToThreeQuadricSurfaces from './intersections/points-common-to-three-quadric-surfaces.ts';
@@ -65,12 +68,15 @@ export const problems: readonly ProblemDefinition[] = [
   planesMeetingNinePlanesIn5Space,
   flexesOfAPlaneCubic,
   bitangentsOfAPlaneQuartic,
+  bitangentsOfAPlaneQuintic,
   flexesOfAPlaneQuartic,
   flexesOfAPlaneQuintic,
   singularCubics,
   singularQuartics,
   singularQuintics,
+  singularSextics,
   tangentLinesFromAPointToAQuartic,
+  tangentLinesFromAPointToAQuintic,
   commonTangentLinesOfTwoConics,
   commonTangentLinesOfTwoCubics,
   pointsCommonToThreeQuadricSurfaces,
