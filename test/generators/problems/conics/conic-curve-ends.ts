@@ -26,7 +26,7 @@ export function endsAtInfinity(definition: ProblemDefinition, instance: Instance
     const z = Array.from({ length: 8 }, (_, k): C => [end.point[2 * k]! * units[k]!, end.point[2 * k + 1]! * units[k]!]);
     const [x, y] = [z[6]!, z[7]!];
     const scale = Math.max(abs(x), abs(y));
-    const [u, v]: C[] = [[x[0] / scale, x[1] / scale], [y[0] / scale, y[1] / scale]];
+    const u: C = [x[0] / scale, x[1] / scale], v: C = [y[0] / scale, y[1] / scale];
     let g: C = [0, 0], gAbs = 0;
     for (const [i, j] of top) {
       const term = mul(param(`g${i}${j}`), mul(power(u, i!), power(v, j!)));
