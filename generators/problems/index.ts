@@ -13,6 +13,9 @@ import conicsThrough3PointsTangentTo2Conics from './conics/conics-through-3-poin
 import conicsThrough2PointsTangentTo3Conics from './conics/conics-through-2-points-tangent-to-3-conics.ts';
 import conicsThrough1PointTangentTo4Conics from './conics/conics-through-1-point-tangent-to-4-conics.ts';
 import conicsTangentTo5Conics from './conics/conics-tangent-to-5-conics.ts';
+import conicsThrough4PointsTangentToACubic from './conics/conics-through-4-points-tangent-to-a-cubic.ts';
+import conicsThrough4PointsTangentToAQuartic from './conics/conics-through-4-points-tangent-to-a-quartic.ts';
+import conicsThrough3PointsTangentToALineAndACubic from './conics/conics-through-3-points-tangent-to-a-line-and-a-cubic.ts';
 import linesOnACubicSurface from './surfaces/lines-on-a-cubic-surface.ts';
 import linesMeetingFourLines from './schubert/lines-meeting-four-lines.ts';
 import linesMeetingSixPlanesIn4Space from './schubert/lines-meeting-six-planes-in-4-space.ts';
@@ -61,6 +64,9 @@ export const problems: readonly ProblemDefinition[] = [
   conicsThrough2PointsTangentTo3Conics,
   conicsThrough1PointTangentTo4Conics,
   conicsTangentTo5Conics,
+  conicsThrough4PointsTangentToACubic,
+  conicsThrough4PointsTangentToAQuartic,
+  conicsThrough3PointsTangentToALineAndACubic,
   linesOnACubicSurface,
   linesMeetingFourLines,
   linesMeetingSixPlanesIn4Space,

@@ -54,3 +54,19 @@ export function tangencyPoint(u: readonly number[], given: readonly number[]): [
   if (!(Math.hypot(...k) > 1e-9 * scale) || Math.abs(k[2]!) < 1e-12 * Math.hypot(...k)) return null; // rank ≤ 1, or at infinity
   return [k[0]! / k[2]!, k[1]! / k[2]!];
 }
+
+/**
+ * The point where the line (u, v, w), ux + vy + w = 0, touches the real conic: the pole adj(M)·(u, v, w) of the line,
+ * dehomogenised; null for a degenerate conic (adj(M) small) or a contact at infinity. Exact up to rounding: for drawing.
+ */
+export function lineContactPoint(conic: readonly number[], line: readonly [number, number, number]): [number, number] | null {
+  const M = matrix(conic);
+  const cof = (i: number, j: number): number => {
+    const r = [0, 1, 2].filter((k) => k !== i), c = [0, 1, 2].filter((k) => k !== j);
+    return (M[r[0]!]![c[0]!]! * M[r[1]!]![c[1]!]! - M[r[0]!]![c[1]!]! * M[r[1]!]![c[0]!]!) * ((i + j) % 2 === 0 ? 1 : -1);
+  };
+  const P = [0, 1, 2].map((i) => cof(0, i) * line[0] + cof(1, i) * line[1] + cof(2, i) * line[2]);
+  const size = Math.hypot(...P), scale = Math.max(...M.flat().map(Math.abs)) ** 2 * Math.hypot(...line);
+  if (!(size > 1e-12 * scale) || Math.abs(P[2]!) < 1e-12 * size) return null;
+  return [P[0]! / P[2]!, P[1]! / P[2]!];
+}
