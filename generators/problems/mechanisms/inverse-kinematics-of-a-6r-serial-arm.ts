@@ -125,13 +125,13 @@ export default defineProblem({
       id: 'glazing-cell',
       kind: 'demo',
       label: 'A glazing arm in a pottery studio',
-      description: 'A pottery studio builds a six-joint arm of its own design to dip bowls in glaze (twists in radians, lengths and offsets in metres, in the parameters below; the target pose is the tool frame of one posture of the arm, so it is reachable). To hold a bowl at that pose the controller can choose among $14$ real postures (of the $16$ complex ones), drawn below; they differ in where every link goes, so the choice decides what the arm sweeps through on its way.',
+      description: 'A pottery studio builds a six-joint arm of its own design to dip bowls in glaze (lengths and offsets in metres, twists given by their cosines $\\lambda_i$ and sines $\\mu_i$ in the parameters below; the target pose is the tool frame of one posture of the arm, so it is reachable). To hold a bowl at that pose the controller can choose among $14$ real postures (of the $16$ complex ones), drawn below; they differ in where every link goes, so the choice decides what the arm sweeps through on its way.',
       seed: 23,
       parameters: armParameters(armData(demoDesign), demoToolFrame),
     },
   ],
   drawing: {
-    projection: 'An orthographic view of space: the scene turned 0.5 rad about the vertical z-axis (joint 1’s axis) and tilted 0.45 rad toward the viewer, so height goes up the page.',
+    projection: 'An orthographic view of space: the scene turned 0.5 rad about the vertical z-axis (joint 1’s axis) and tilted 0.45 rad toward the viewer, so height goes up the page; each posture is drawn as its chain of offsets along the joint axes and lengths along the common normals, from the base origin to the tool point, with a dot on each joint axis where its common normal leaves it, the last at the tool point.',
     window: (p, items) => fitWindow([...baseAndTarget(p), ...(items ?? [])]),
     configuration: baseAndTarget,
     solution: (values, p) => {
