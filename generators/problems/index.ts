@@ -47,6 +47,7 @@ import forwardKinematicsOfAPlanar3RprRobot from './mechanisms/forward-kinematics
 import perspectiveThreePointPose from './mechanisms/perspective-three-point-pose.ts';
 import forwardKinematicsOfAStewartGoughPlatform from './mechanisms/forward-kinematics-of-a-stewart-gough-platform.ts';
 import relativePoseFromFivePointPairs from './mechanisms/relative-pose-from-five-point-pairs.ts';
+import inverseKinematicsOfA6rSerialArm from './mechanisms/inverse-kinematics-of-a-6r-serial-arm.ts';
 
 /** Every problem of the atlas, in the order the home page lists them. Slugs are permanent. */
 export const problems: readonly ProblemDefinition[] = [
@@ -98,4 +99,5 @@ export const problems: readonly ProblemDefinition[] = [
   perspectiveThreePointPose,
   forwardKinematicsOfAStewartGoughPlatform,
   relativePoseFromFivePointPairs,
+  inverseKinematicsOfA6rSerialArm,
 ];
