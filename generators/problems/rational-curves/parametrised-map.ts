@@ -26,22 +26,28 @@ export function mapParameters(degree: number): string[] {
 
 /**
  * The map's coordinates at t as nodes: φ(t) = αP₁ + Σ_{k<d−1} c_k t^k + c_{d−1} t^{d−1} + λP₃ t^d with P_i = (px_i, py_i, 1)
- * and c_{d−1} = μP₂ − αP₁ − Σ c_k − λP₃, so φ(0) = αP₁, φ(1) = μP₂ and φ(∞) ∝ P₃; α is `scale` (default 1, exact).
+ * and c_{d−1} = μP₂ − αP₁ − Σ c_k − λP₃, so φ(0) = αP₁, φ(1) = μP₂ and φ(∞) ∝ P₃; α is `scale` (default 1). With `s`,
+ * the binary form at (s, t) instead: term k times s^{d−k} (exact).
  */
-export function mapAt(degree: number, u: Readonly<Record<string, ExprNode>>, q: Readonly<Record<string, ExprNode>>, ops: Ops, t: ExprNode, scale?: ExprNode): ExprNode[] {
+export function mapAt(degree: number, u: Readonly<Record<string, ExprNode>>, q: Readonly<Record<string, ExprNode>>, ops: Ops, t: ExprNode, scale?: ExprNode, s?: ExprNode): ExprNode[] {
+  const weight = (k: number): ExprNode[] => [...(k > 0 ? [ops.pow(t, k)] : []), ...(s && k < degree ? [ops.pow(s, degree - k)] : [])];
   return AXES.map((a) => {
     const P = (i: number) => (a === 'z' ? ops.constant(1) : q[`p${a}${i}`]!);
     const first = scale ? ops.mul(scale, P(1)) : P(1);
     const inner = innerOrders(degree).map((k) => u[`c${k}${a}`]!);
     const last = ops.sub(ops.mul(u.mu!, P(2)), ops.add(first, ...inner, ops.mul(u.lambda!, P(3))));
-    return ops.add(first, ...inner.map((c, k) => ops.mul(c, ops.pow(t, k + 1))), ops.mul(last, ops.pow(t, degree - 1)), ops.mul(u.lambda!, P(3), ops.pow(t, degree)));
+    const terms = [first, ...inner, last, ops.mul(u.lambda!, P(3))];
+    return ops.add(...terms.map((c, k) => (k === 0 && !s ? c : ops.mul(c, ...weight(k)))));
   });
 }
 
-/** The 6d − 8 incidence equations x(t_i) − px_i z(t_i) = y(t_i) − py_i z(t_i) = 0 of the traced points (mapAt with `scale`). */
-export function incidenceEquations(degree: number, u: Readonly<Record<string, ExprNode>>, q: Readonly<Record<string, ExprNode>>, ops: Ops, scale?: ExprNode): ExprNode[] {
+/**
+ * The 6d − 8 incidence equations x(t_i) − px_i z(t_i) = y(t_i) − py_i z(t_i) = 0 of the traced points (mapAt with
+ * `scale`); with `homogeneous`, point i's parameter is the pair (s_i, u_i) of unknowns `s${i}`, `u${i}` instead of `t${i}`.
+ */
+export function incidenceEquations(degree: number, u: Readonly<Record<string, ExprNode>>, q: Readonly<Record<string, ExprNode>>, ops: Ops, scale?: ExprNode, homogeneous = false): ExprNode[] {
   return tracedPoints(degree).flatMap((i) => {
-    const [x, y, z] = mapAt(degree, u, q, ops, u[`t${i}`]!, scale);
+    const [x, y, z] = homogeneous ? mapAt(degree, u, q, ops, u[`u${i}`]!, scale, u[`s${i}`]!) : mapAt(degree, u, q, ops, u[`t${i}`]!, scale);
     return [ops.sub(x!, ops.mul(q[`px${i}`]!, z!)), ops.sub(y!, ops.mul(q[`py${i}`]!, z!))];
   });
 }

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { chartedMapSystem, chartedToShown, chartLength, convertMapChart, randomMapChart, shownToCharted } from '../../../../generators/problems/rational-curves/charted-map.ts';
+import { chartedMapSystem, chartedMapUnknowns, chartedToShown, chartLength, convertMapChart, randomMapChart, shownToCharted } from '../../../../generators/problems/rational-curves/charted-map.ts';
 import { parametrisedMapSeed } from '../../../../generators/problems/rational-curves/parametrised-map.ts';
 import { compileSystem, createRandom } from '../../../../src/engine/index.ts';
 
@@ -22,6 +22,11 @@ describe('the parametrised map in a random chart', () => {
     const charted = shownToCharted(degree, solution, chart);
     expect(residual(degree, chart, charted, parameters)).toBeLessThan(1e-10);
     expect(close(chartedToShown(degree, charted), solution)).toBeLessThan(1e-10);
+  });
+
+  it.each([[3, 16], [4, 25]])('degree %i: a square working system of %i unknowns (map, its chart, and a pair per traced point)', (degree, n) => {
+    expect(chartedMapUnknowns(degree)).toHaveLength(n);
+    expect(chartedMapSystem(degree, randomMapChart(degree, createRandom(1))).equations).toHaveLength(n);
   });
 
   it('moves a solution to another chart, where it solves that chart’s system', () => {
