@@ -11,8 +11,8 @@ export const MAP_SETS_DIR = join(import.meta.dirname, 'data');
 /**
  * Tracker settings of the maps: corrections in double-double, and ends counted singular only above condition 1e15 (not
  * 1e10): near a degenerate map (preimages crowding together) genuine solutions reach conditions of 1e10 and beyond in
- * binary64, which the extended-precision Newton still resolves (measured at degree 4: with 1e13 monodromy stalled at 619
- * of 620 twice, with 1e15 it reached 620). Two stricter retries, then other random charts.
+ * binary64, which the extended-precision Newton still resolves (measured at degree 4 with t affine: with 1e13 monodromy
+ * stalled at 619 of 620 twice, with 1e15 it reached 620). Two stricter retries, then other random charts.
  */
 export const MAP_TRACKER_SETTINGS: Partial<TrackerSettings> = { precision: 'double-double', singularCondition: 1e15, retries: 2 };
 
