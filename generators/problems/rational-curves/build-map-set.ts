@@ -18,6 +18,5 @@ const monodromy = await discoverByMonodromy({ track, seed: { parameters, solutio
 await closeSharedPool();
 const m = monodromy.stats;
 console.log(`${spec.name}: ${monodromy.solutions.length} (${monodromy.stop}), ${m.paths} paths, ${m.failedPaths} failed, ${m.jumps} jumps (${m.unresolvedJumps} unresolved), ${m.nodes} nodes, ${m.edges} edges, ${m.rounds} rounds, ${((performance.now() - began) / 1000).toFixed(0)} s`);
-if (monodromy.solutions.length !== spec.expected) writeStoredSet({ name: spec.name, shape: spec.shape, seed: spec.seed, chart, parameters: monodromy.parameters, solutions: monodromy.solutions }, '/tmp/q/short');
 if (monodromy.solutions.length !== spec.expected) throw new Error(`${spec.name}: monodromy found ${monodromy.solutions.length}, not the published ${spec.expected}; nothing written`);
 console.log(writeStoredSet({ name: spec.name, shape: spec.shape, seed: spec.seed, chart, parameters: monodromy.parameters, solutions: monodromy.solutions }, spec.dir));
