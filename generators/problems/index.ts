@@ -43,6 +43,7 @@ import euclideanDistanceDegreeOfAQuadricSurface from './distance-and-optimisatio
 import eigenvectorsOfASymmetricTernaryCubic from './distance-and-optimisation/eigenvectors-of-a-symmetric-ternary-cubic.ts';
 import eigenvectorsOfASymmetricTernaryQuartic from './distance-and-optimisation/eigenvectors-of-a-symmetric-ternary-quartic.ts';
 import rationalCubicsThrough8Points from './rational-curves/rational-cubics-through-8-points.ts';
+import rationalQuarticsThrough11Points from './rational-curves/rational-quartics-through-11-points.ts';
 import forwardKinematicsOfAPlanar3RprRobot from './mechanisms/forward-kinematics-of-a-planar-3-rpr-robot.ts';
 import perspectiveThreePointPose from './mechanisms/perspective-three-point-pose.ts';
 import forwardKinematicsOfAStewartGoughPlatform from './mechanisms/forward-kinematics-of-a-stewart-gough-platform.ts';
@@ -95,6 +96,7 @@ export const problems: readonly ProblemDefinition[] = [
   eigenvectorsOfASymmetricTernaryCubic,
   eigenvectorsOfASymmetricTernaryQuartic,
   rationalCubicsThrough8Points,
+  rationalQuarticsThrough11Points,
   forwardKinematicsOfAPlanar3RprRobot,
   perspectiveThreePointPose,
   forwardKinematicsOfAStewartGoughPlatform,

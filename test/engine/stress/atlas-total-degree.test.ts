@@ -12,6 +12,9 @@ import { expectEveryPathAccountedFor, outcome } from './solve-checks.ts';
 // with no failed path. The naive five-conic run (7776 paths of a sextic system) is too slow for CI and runs in the
 // bench instead: `npm run bench -- --suite stress --only five-conic --runs 1`.
 const BENCH_ONLY = new Set(['conics-tangent-to-5-conics']);
+// Out of reach of any total-degree run, bench included: the shown parametrised-map system of the rational quartics has
+// Bézout bound 5^16 = 152587890625 (its page says so and solves it by monodromy and a stored set instead).
+const OUT_OF_REACH = new Set(['rational-quartics-through-11-points']);
 
 /** "Chasles 1864"-style label of a count's source (the test names carry it beside the count). */
 function sourceLabel(source: CountSource): string {
@@ -20,7 +23,7 @@ function sourceLabel(source: CountSource): string {
 }
 
 const rows = problems
-  .filter((p) => !BENCH_ONLY.has(p.slug) && p.trueCount.value !== null)
+  .filter((p) => !BENCH_ONLY.has(p.slug) && !OUT_OF_REACH.has(p.slug) && p.trueCount.value !== null)
   .map((p) => ({ p, label: `${p.slug}: ${p.trueCount.value} (${sourceLabel(p.trueCount.source)})` }));
 
 describe('every atlas problem solved by total degree at its generic instance', () => {
