@@ -14,7 +14,6 @@ import conicsThrough2PointsTangentTo3Conics from './conics/conics-through-2-poin
 import conicsThrough1PointTangentTo4Conics from './conics/conics-through-1-point-tangent-to-4-conics.ts';
 import conicsTangentTo5Conics from './conics/conics-tangent-to-5-conics.ts';
 import linesOnACubicSurface from './surfaces/lines-on-a-cubic-surface.ts';
-import linesOnAQuinticThreefold from './surfaces/lines-on-a-quintic-threefold.ts';
 import linesMeetingFourLines from './schubert/lines-meeting-four-lines.ts';
 import linesMeetingSixPlanesIn4Space from './schubert/lines-meeting-six-planes-in-4-space.ts';
 import linesMeetingEight3PlanesIn5Space from './schubert/lines-meeting-eight-3-planes-in-5-space.ts';
@@ -60,7 +59,6 @@ export const problems: readonly ProblemDefinition[] = [
   conicsThrough1PointTangentTo4Conics,
   conicsTangentTo5Conics,
   linesOnACubicSurface,
-  linesOnAQuinticThreefold,
   linesMeetingFourLines,
   linesMeetingSixPlanesIn4Space,
   linesMeetingEight3PlanesIn5Space,

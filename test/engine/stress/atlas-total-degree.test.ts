@@ -10,9 +10,9 @@ import { expectEveryPathAccountedFor, outcome } from './solve-checks.ts';
 // (its recorded seed and random complex parameters), whatever solver the problem itself uses. The distinct
 // nonsingular solutions must be exactly the problem's published count (trueCount.value, its source in the test name)
 // with no failed path. The naive five-conic run (7776 paths of a sextic system) is too slow for CI and runs in the
-// bench instead: `npm run bench -- --suite stress --only five-conic --runs 1`; so does the naive quintic-lines run
-// (15625 paths of a quintic system in six unknowns): `--only quintic`.
-const BENCH_ONLY = new Set(['conics-tangent-to-5-conics', 'lines-on-a-quintic-threefold']);
+// bench instead: `npm run bench -- --suite stress --only five-conic --runs 1`.
+// The quintic-lines definition (not yet registered) has its naive 15625-path run in the same suite: `--only quintic`.
+const BENCH_ONLY = new Set(['conics-tangent-to-5-conics']);
 
 /** "Chasles 1864"-style label of a count's source (the test names carry it beside the count). */
 function sourceLabel(source: CountSource): string {
