@@ -1,6 +1,7 @@
 import { solveSystem } from '../../src/engine/index.ts';
 import type { BenchCase, BenchOutcome } from './bench-case.ts';
 import { naiveFiveConicsCase } from './naive-five-conics-case.ts';
+import { naiveQuinticLinesCase } from './naive-quintic-lines-case.ts';
 import { stressSystem } from './stress/stress-system.ts';
 import { BENCH_SEEDS, CHANGES, DENSE_FAMILIES, EXCESS_FAMILIES, type ChangeRecipe } from './stress/stress-corpus.ts';
 import type { StressFamily } from './stress/stress-family.ts';
@@ -29,7 +30,7 @@ async function solveSeeds(family: StressFamily, change: ChangeRecipe): Promise<B
 /**
  * The stress corpus (generators/bench/stress/): every family × change of coordinates over seeds 1…10, expected =
  * 10 × the family's isolated count (Bézout's theorem for the dense families, Cox–Little–O'Shea 2005, ch. 3; the excess
- * families' counts in stress-family.ts), and the naive total-degree five-conic run. Heavy: one run of the whole suite
+ * families' counts in stress-family.ts), the naive total-degree five-conic run and the naive 15625-path quintic-lines run. Heavy: one run of the whole suite
  * takes several minutes on two cores, so run it with `npm run bench -- --suite stress --runs 1` (run.ts has one
  * --runs for all cases), or pick cases with --only.
  */
@@ -40,4 +41,5 @@ export const cases: BenchCase[] = [
     run: () => solveSeeds(family, change),
   }))),
   naiveFiveConicsCase,
+  naiveQuinticLinesCase,
 ];
