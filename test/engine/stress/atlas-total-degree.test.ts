@@ -12,7 +12,10 @@ import { expectEveryPathAccountedFor, outcome } from './solve-checks.ts';
 // with no failed path. The naive five-conic run (7776 paths of a sextic system) is too slow for CI and runs in the
 // bench instead: `npm run bench -- --suite stress --only five-conic --runs 1`.
 // The quintic-lines definition (not yet registered) has its naive 15625-path run in the same suite: `--only quintic`.
-const BENCH_ONLY = new Set(['conics-tangent-to-5-conics']);
+// The quintic's bitangents by total degree track 21504 paths (about 2 minutes on 2 cores): all 120 are found, but 128
+// paths fail on the way to the surplus at infinity (measured 2026-12-05; engine README, Known limits). Its page solves
+// them by the three-group homotopy (2400 paths, 0 failed).
+const BENCH_ONLY = new Set(['conics-tangent-to-5-conics', 'bitangents-of-a-plane-quintic']);
 // Out of reach of any total-degree run, bench included: the shown parametrised-map system of the rational quartics has
 // Bézout bound 5^16 = 152587890625 (its page says so and solves it by monodromy and a stored set instead).
 const OUT_OF_REACH = new Set(['rational-quartics-through-11-points']);
