@@ -4,7 +4,7 @@ import type { PolynomialSystem } from '../../src/engine/index.ts';
 import { coordinatesOf, isRealValues } from './coordinates-of.ts';
 import type { EngineReport, EngineServices } from './engine-services.ts';
 import { figureOf } from './figure-of.ts';
-import { GROUP_LIMIT } from './monodromy-group-of.ts';
+import { wantsGroup } from './monodromy-group-of.ts';
 import { pathNotes } from './path-notes.ts';
 import { roundNumbers } from './round-numbers.ts';
 import { instanceSidecar, type InstanceSidecar } from './sidecars-of.ts';
@@ -29,7 +29,7 @@ export interface InstanceRun {
  * solution, the count ladder (complete only for a generic instance whose certified distinct count equals the
  * published count), path statistics, notes and the figure. Returns the seconds spent solving and certifying too, and
  * the instance's sidecar (expanded equations with the exact parameters, certificate boxes) for the files beside the record.
- * A generic instance with 2…GROUP_LIMIT solutions, all certified distinct, also gets its monodromy group (engine.group).
+ * A generic instance with 2…LARGE_GROUP_LIMIT solutions (wantsGroup), all certified distinct, also gets its monodromy group (engine.group).
  */
 export async function assembleInstance(run: InstanceRun, engine: EngineServices): Promise<{ result: InstanceResult; seconds: number; sidecar: InstanceSidecar }> {
   const { definition, instance, report, where } = run;
@@ -55,8 +55,8 @@ export async function assembleInstance(run: InstanceRun, engine: EngineServices)
     };
   });
   const rounded = roundNumbers(solutions);
-  const group = engine.group && instance.kind === 'generic' && found.length >= 2 && found.length <= GROUP_LIMIT && verdict.certifiedDistinct === found.length
-    ? await engine.group(run.system, run.parameters, points, { seed: run.seed })
+  const group = engine.group && instance.kind === 'generic' && wantsGroup(found.length) && verdict.certifiedDistinct === found.length
+    ? await engine.group(run.system, run.parameters, points, run.workers === undefined ? { seed: run.seed, definition } : { seed: run.seed, workers: run.workers, definition })
     : null;
   const trueCount = definition.trueCount.value;
   const counts = {

@@ -104,7 +104,7 @@ export interface EngineServices {
    * Optional: the monodromy group of a generic instance's distinct nonsingular solutions by random loops (seeded);
    * absent in engines without it (the record then carries no group).
    */
-  readonly group?: (system: PolynomialSystem, parameters: Float64Array, points: readonly Float64Array[], options: { seed: number }) => Promise<MonodromyGroup>;
+  readonly group?: (system: PolynomialSystem, parameters: Float64Array, points: readonly Float64Array[], options: { seed: number; workers?: number; definition?: ProblemDefinition }) => Promise<MonodromyGroup>;
   /** Ends any worker threads the engine started (the CLI calls it once a command is done); absent when there are none. */
   readonly close?: () => Promise<void>;
 }

@@ -11,7 +11,7 @@ import { AtlasError } from './atlas-error.ts';
  */
 export async function loadEngine(): Promise<EngineServices> {
   const engineSurface = await import('../../src/engine/index.ts');
-  const { solveSystem, finishSolve, certifySolutions, certifySolutionsParallel, closeCertifyWorkers, ENGINE_VERSION, solveByParameterHomotopy, createPoolLegTracker, sharedPool, closeSharedPool } = engineSurface;
+  const { solveSystem, finishSolve, certifySolutions, certifySolutionsParallel, closeCertifyWorkers, ENGINE_VERSION, solveByParameterHomotopy, createPoolLegTracker, createModuleLegTracker, sharedPool, closeSharedPool } = engineSurface;
   const startSystem = (start: 'total-degree' | 'multihomogeneous', label: string): SolveStrategy => ({
     label,
     shardable: true,
@@ -44,7 +44,18 @@ export async function loadEngine(): Promise<EngineServices> {
     version: ENGINE_VERSION,
     strategies,
     complete: (system, parameters, points, { seed }) => completenessChecks(engineSurface, system, parameters, points, seed),
-    group: (system, parameters, points, { seed }) => monodromyGroupOf(engineSurface, system, parameters, points, seed),
+    // Problems solved from a stored set walk their loops there, with the family's own homotopy module (its random
+    // charts keep routes the shown formulation's fixed chart can lose); the group is the same at every base point.
+    group: async (system, parameters, points, { seed, workers, definition }) => {
+      const choice = definition?.solver;
+      if (choice?.kind !== 'parameter-homotopy') return monodromyGroupOf(engineSurface, system, parameters, points, seed, workers === undefined ? {} : { workers });
+      const problem = await choice.prepare(system);
+      const start = problem.start;
+      if (start.solutions.length !== points.length) return monodromyGroupOf(engineSurface, system, parameters, points, seed, workers === undefined ? {} : { workers });
+      const track = workers ? createPoolLegTracker(await sharedPool(workers), problem.working) : await createModuleLegTracker(problem.working);
+      const shape = { n: start.solutions[0]!.length / 2, np: start.parameters.length / 2 };
+      return monodromyGroupOf(engineSurface, system, parameters, points, seed, { base: { shape, parameters: start.parameters, solutions: start.solutions, track } });
+    },
     certify: (system, parameters, points, { workers, ...options }) =>
       workers ? certifySolutionsParallel(system, parameters, points, { ...options, workers }) : certifySolutions(system, parameters, points, options),
     collect: (system, parameters, ends, bounds, seed) => finishSolve(system, parameters, ends, { ...bounds }, seed),

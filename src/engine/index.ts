@@ -32,6 +32,7 @@ export type { ParameterLeg } from './parameter/gamma-arc.ts';
 export { randomGamma, type LegTracker } from './parameter/route.ts';
 export { createInProcessLegTracker } from './parameter/in-process-tracker.ts';
 export { createPoolLegTracker } from './parameter/pool-tracker.ts';
+export { createModuleLegTracker } from './parameter/module-tracker.ts';
 export { createHomotopy as createCompiledLegHomotopy, COMPILED_LEG_MODULE, type CompiledLegConstants } from './parameter/compiled-leg-module.ts';
 export { discoverByMonodromy, type MonodromyResult, type MonodromyOptions, type MonodromyStop } from './monodromy/discover.ts';
 export { createArrowheadSolver, checkArrowheadLayout, type ArrowheadLayout } from './linalg/arrowhead-solver.ts';
@@ -46,6 +47,6 @@ export { certifySolutionsParallel, closeCertifyWorkers } from './certify/certify
 export { finishSolve } from './solve/solve-system.ts';
 export { multiplyComplex } from './certify/complex-inverse.ts';
 // Monodromy groups (issue 12): loop permutations of a solution set and what group they generate.
-export { monodromyPermutations, type MonodromyLoopOptions, type MonodromyLoopsReport, type LoopOutcome } from './complete/monodromy-permutations.ts';
+export { monodromyPermutations, loopPermutations, type LoopShape, type MonodromyLoopOptions, type MonodromyLoopsReport, type LoopOutcome } from './complete/monodromy-permutations.ts';
 export { describeGroup, EXACT_ORDER_LIMIT, type GroupDescription, type GroupVerdict } from './galois/describe-group.ts';
 export { carrySolutions, type CarriedSolutions } from './complete/carry-solutions.ts';

@@ -105,6 +105,9 @@ export function conicTangencyProblem(points: number, seeds: { generic: number; s
         `The naive count $6^{${k}} = ${bound}$ exceeds $${count}$ because every double line $(\\alpha x + \\beta y + \\gamma)^2$ is "tangent" to every conic: its matrix has rank one, so the binary cubic $\\det(sA + tU)$ has the double root $(s : t) = (0 : 1)$ and the tangency discriminant vanishes, to higher order.`,
         `The double lines form a surface (the Veronese surface) in $\\mathbb{P}^5$${points > 0 ? `, which the ${plural(points, 'point condition')} cut down` : ''}; ${bound - count} of the naive count's solutions are absorbed there as an excess component, and only the ${count} genuine conics remain isolated.${naiveRunSentence(conicLadderSlug(points))}`,
       ].join(' '),
+    // J. Harris, Galois groups of enumerative problems, Duke Math. J. 46 (1979) 685–724: the conics tangent to five
+    // general conics have the full symmetric group on the 3264 (only this rung is claimed here)
+    ...(points === 0 ? { publishedGroup: { name: 'S₃₂₆₄, the full symmetric group', symmetricOn: count, citation: 'J. Harris, Galois groups of enumerative problems, Duke Math. J. 46 (1979) 685–724' } } : {}),
     instances: [
       { id: 'generic', kind: 'generic', label: 'Random complex data', description: 'Points and conics with coefficients drawn as random complex numbers from the recorded seed.', seed: seeds.generic },
       { id: demo.id, kind: 'demo', label: demo.label, description: demo.description, seed: 17, parameters },

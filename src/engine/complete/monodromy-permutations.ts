@@ -41,6 +41,12 @@ export interface MonodromyLoopsReport {
   readonly jumps: number;
 }
 
+/** The sizes a loop walk needs: complex unknowns n (as in the solutions) and complex parameters np. */
+export interface LoopShape {
+  readonly n: number;
+  readonly np: number;
+}
+
 /**
  * Monodromy permutations of a solution set (Harris 1979; numerically, Leykin–Sottile, Math. Comp. 78, 2009): every
  * solution at `parameters` is carried around random triangles p → q₁ → q₂ → p (random complex vertices and gammas),
@@ -51,19 +57,29 @@ export interface MonodromyLoopsReport {
  * set or on two solutions within the tolerance.
  */
 export async function monodromyPermutations(compiled: CompiledEquations, parameters: Float64Array, solutions: readonly Float64Array[], options: MonodromyLoopOptions): Promise<MonodromyLoopsReport> {
+  const track = options.track ?? (await compiledLegTracker(compiled, options.pool, options.settings));
+  return loopPermutations({ n: compiled.n, np: compiled.np }, parameters, solutions, { ...options, track });
+}
+
+/**
+ * monodromyPermutations over any leg tracker (a family's own homotopy module, say, whose coordinates differ from a
+ * compiled system's): `shape` gives the sizes, `options.track` carries the solutions along each leg. Same contract,
+ * same loops for the same seed and shape.
+ */
+export async function loopPermutations(shape: LoopShape, parameters: Float64Array, solutions: readonly Float64Array[], options: Omit<MonodromyLoopOptions, 'track' | 'pool' | 'settings'> & { readonly track: LegTracker }): Promise<MonodromyLoopsReport> {
   const tolerance = options.tolerance ?? 1e-8;
   if (solutions.length === 0) throw new RangeError('monodromyPermutations needs at least one solution');
-  const base = createPointIndex(compiled.n, tolerance);
+  const base = createPointIndex(shape.n, tolerance);
   for (const x of solutions) {
     if (base.find(x) >= 0) throw new RangeError('monodromyPermutations: two given solutions coincide within the tolerance');
     base.add(x);
   }
   const random = createRandom(options.seed);
-  const track = options.track ?? (await compiledLegTracker(compiled, options.pool, options.settings));
+  const track = options.track;
   const outcomes: LoopOutcome[] = [];
   let paths = 0, failedPaths = 0, jumps = 0;
   for (let loop = 0; loop < options.loops; loop++) {
-    const legs = triangleLegs(parameters, randomParameterPoint(compiled.np, random), randomParameterPoint(compiled.np, random), random);
+    const legs = triangleLegs(parameters, randomParameterPoint(shape.np, random), randomParameterPoint(shape.np, random), random);
     const walk = await walkLoop(track, legs, base, false, tolerance);
     paths += walk.paths; failedPaths += walk.failedPaths; jumps += walk.jumps;
     const image = walk.routes.map((r) => (r.ok ? base.find(r.via[r.via.length - 1]!) : -1));

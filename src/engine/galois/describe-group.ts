@@ -7,8 +7,8 @@ export const EXACT_ORDER_LIMIT = 64;
 
 /**
  * What the generated group is: 'symmetric' (S_n proven), 'alternating' (A_n proven, every element even),
- * 'intransitive', 'order' (exact order known, neither S_n nor A_n), or 'undecided' (too large for the exact order and
- * no Jordan witness seen).
+ * 'intransitive', 'order' (exact order known, neither S_n nor A_n), or 'undecided' (no element given, or too large
+ * for the exact order and no Jordan witness seen).
  */
 export type GroupVerdict = 'symmetric' | 'alternating' | 'intransitive' | 'order' | 'undecided';
 
@@ -38,7 +38,8 @@ export function describeGroup(elements: readonly Permutation[], n: number): Grou
   const evidence = alternatingEvidence(elements, n);
   const order = n <= EXACT_ORDER_LIMIT ? groupOrder(elements, n) : null;
   let verdict: GroupVerdict;
-  if (!evidence.transitive) verdict = 'intransitive';
+  if (elements.length === 0 && n > 1) verdict = 'undecided';
+  else if (!evidence.transitive) verdict = 'intransitive';
   else if (order !== null) verdict = order === factorial(n) ? 'symmetric' : n > 2 && order * 2n === factorial(n) ? 'alternating' : 'order';
   else if (evidence.containsAlternating) verdict = evidence.oddElement !== null ? 'symmetric' : 'alternating';
   else verdict = 'undecided';

@@ -25,6 +25,9 @@ describe('describeGroup', () => {
     const d = describeGroup([cycle(n, ...Array.from({ length: n }, (_, i) => i))], n);
     expect(d.verdict).toBe('undecided');
   });
+  it.each([2, 9, EXACT_ORDER_LIMIT + 1])('with no element at all (every loop broken) on %i points, claims nothing: undecided, not intransitive', (n) => {
+    expect(describeGroup([], n).verdict).toBe('undecided');
+  });
   it('counts cycle types, most frequent first', () => {
     const t = cycle(6, 0, 1);
     const d = describeGroup([t, t, cycle(6, 0, 1, 2, 3, 4, 5)], 6);

@@ -8,6 +8,7 @@ import bitangents from '../../../generators/problems/plane-curves/bitangents-of-
 import flexes from '../../../generators/problems/plane-curves/flexes-of-a-plane-cubic.ts';
 import twoCubics from '../../../generators/problems/intersections/points-common-to-two-cubics.ts';
 import fourLines from '../../../generators/problems/schubert/lines-meeting-four-lines.ts';
+import { curvePairProblem } from '../../../generators/problems/intersections/curve-pair.ts';
 import type { ProblemDefinition } from '../../../src/atlas/definition.ts';
 import { randomInstance } from '../problems/shared/solve.ts';
 
@@ -44,6 +45,45 @@ describe('monodromy groups of classical problems match the published groups', ()
     expect(group.order).toBe(order);
     expect(definition.publishedGroup?.order).toBe(order); // the page shows the same published order
   }, 120_000);
+});
+
+// Above 64 solutions no order is computed: Jordan's test decides (Hauenstein–Rodriguez–Sottile, Math. Comp. 87, 2018).
+// Harris 1979 (Duke Math. J. 46): the d² points common to two general plane curves of degree d have the full
+// symmetric group; for d = 9 that is S₈₁, and the loops must prove it.
+const nonics = curvePairProblem({
+  slug: 'test-two-nonics', degree: 9, noun: 'nonic', genericSeed: 3, view: { xMin: -1, xMax: 1, yMin: -1, yMax: 1 },
+  demo: { id: 'unused', label: 'unused', description: 'unused', p: Array(55).fill(1), q: Array(55).fill(1) },
+});
+
+describe('monodromy groups above the exact-order limit', () => {
+  it('proves S₈₁ for the 81 points common to two general nonics (Harris 1979) by Jordan’s theorem, stopping at the first round that proves it', async () => {
+    const system = systemOf(nonics);
+    const parameters = parametersOf(nonics, randomInstance(9));
+    const report = await engine.solveSystem(system, parameters, { seed: 9, start: 'total-degree' });
+    expect(report.solutions).toHaveLength(81);
+    const group = await monodromyGroupOf(engine, system, parameters, report.solutions.map((s) => s.point), 4);
+    expect(group).toMatchObject({ degree: 81, order: null, verdict: 'symmetric', transitive: true, primitive: true, oddLoop: true });
+    expect(group.primeCycle).toBeGreaterThan(1);
+    expect(group.primeCycle).toBeLessThanOrEqual(78);
+    expect(group.loops % 2).toBe(0);
+    expect(group.loops).toBeLessThanOrEqual(8);
+  }, 120_000);
+
+  it('walks rounds of two loops and stops once the verdict is symmetric', async () => {
+    const n = 70;
+    const cycle = Int32Array.from({ length: n }, (_, i) => (i + 1) % n); // a 70-cycle: transitive, odd
+    const fixFive = Int32Array.from({ length: n }, (_, i) => (i < 67 ? (i + 1) % 67 : i)); // a 67-cycle, 67 ≤ n − 3 prime
+    let calls = 0;
+    const walk = async (_c: unknown, _p: unknown, _x: unknown, o: { loops: number }) => {
+      calls++;
+      return { permutations: calls === 1 ? [cycle, cycle] : Array.from({ length: o.loops }, () => fixFive) };
+    };
+    const fake = { compileSystem: engine.compileSystem, describeGroup: engine.describeGroup, monodromyPermutations: walk } as unknown as Parameters<typeof monodromyGroupOf>[0];
+    const system = { unknowns: ['x'], parameters: [], equations: [engine.exprBuilders.unknown('x', 0)] };
+    const group = await monodromyGroupOf(fake, system, new Float64Array(0), Array.from({ length: n }, () => new Float64Array(2)), 3);
+    expect(group).toMatchObject({ loops: 4, closedLoops: 4, verdict: 'symmetric', primeCycle: 67, order: null });
+    expect(calls).toBe(2);
+  });
 });
 
 describe('the group block of a record', () => {

@@ -55,3 +55,20 @@ describe('the production engine with and without workers', () => {
     expect(JSON.parse(plain(two))).toEqual(JSON.parse(plain(one))); // the same fields and numbers, in any key order
   });
 });
+
+describe('the production engine’s monodromy group for a problem solved from a stored set', () => {
+  const engine = loadEngine();
+  afterAll(async () => (await engine).close?.());
+
+  // The monodromy group of x⁶⁴ = p is cyclic of order 64: a loop around p = 0 turns the roots by one step (common
+  // practice, no source). The loops start at the stored set (p = 1) with the family's module, on this thread and
+  // on two workers, and must give the same group as loops walked at the solved instance.
+  it.each([[undefined], [2]])('walks its loops on the stored set (workers: %s) and finds the cyclic group of order 64', async (workers) => {
+    const e = await engine;
+    const points = (await e.strategies['parameter-homotopy']!.solve(shown, target, { seed: 7 }, definition)).solutions.map((s) => s.point);
+    const group = await e.group!(shown, target, points, workers === undefined ? { seed: 5, definition } : { seed: 5, workers, definition });
+    expect(group).toMatchObject({ degree: DEGREE, order: '64', transitive: true, verdict: 'order' });
+    const atInstance = await e.group!(shown, target, points, { seed: 5 });
+    expect(atInstance.order).toBe('64');
+  });
+});
