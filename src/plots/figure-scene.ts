@@ -1,3 +1,4 @@
+import { simplifyPolyline } from './simplify-polyline.ts';
 import { line as d3line } from 'd3-shape';
 import type { Figure, FigureItem } from '../atlas/figure.ts';
 import { clipLine, clipPolyline, type Point } from './clip.ts';
@@ -36,27 +37,19 @@ export const CURVE_TOLERANCE = 0.02;
 const round2 = (v: number) => Math.round(v * 100) / 100;
 const pathOf = d3line<Point>().digits(2);
 
+/** Distance in the plane from p to the line through a and b (to a itself when a = b). */
+function offLine(p: Point, a: Point, b: Point): number {
+  const dx = b[0] - a[0], dy = b[1] - a[1], len = Math.hypot(dx, dy);
+  return len === 0 ? Math.hypot(p[0] - a[0], p[1] - a[1]) : Math.abs(dy * (p[0] - a[0]) - dx * (p[1] - a[1])) / len;
+}
+
 /**
- * Douglas–Peucker: keeps the points a polyline needs so that no dropped point lies farther than `tolerance` from the
- * kept polyline (first and last always kept). Smaller paths, the same look at every zoom the page allows.
+ * Douglas–Peucker in the plane (simplify-polyline.ts), distances to the line through the kept ends: no dropped point
+ * lies farther than `tolerance` from the kept polyline (first and last always kept). Smaller paths, the same look at
+ * every zoom the page allows.
  */
 export function simplify(points: readonly Point[], tolerance: number): Point[] {
-  if (points.length <= 2) return [...points];
-  const keep = new Uint8Array(points.length);
-  keep[0] = 1; keep[points.length - 1] = 1;
-  const stack: [number, number][] = [[0, points.length - 1]];
-  while (stack.length > 0) {
-    const [i, j] = stack.pop()!;
-    const a = points[i]!, b = points[j]!, dx = b[0] - a[0], dy = b[1] - a[1], len = Math.hypot(dx, dy);
-    let worst = -1, far = 0;
-    for (let k = i + 1; k < j; k++) {
-      const p = points[k]!;
-      const dist = len === 0 ? Math.hypot(p[0] - a[0], p[1] - a[1]) : Math.abs(dy * (p[0] - a[0]) - dx * (p[1] - a[1])) / len;
-      if (dist > far) { far = dist; worst = k; }
-    }
-    if (worst >= 0 && far > tolerance) { keep[worst] = 1; stack.push([i, worst], [worst, j]); }
-  }
-  return points.filter((_, k) => keep[k] === 1);
+  return simplifyPolyline(points, tolerance, offLine);
 }
 
 /**

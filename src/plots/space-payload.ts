@@ -1,4 +1,5 @@
 // Built at site build time: the space figure as the page embeds it, shared by the static SVG and the client.
+import { simplifyPolyline } from './simplify-polyline.ts';
 import type { Sight, SpaceFigure, SpaceItem, SpacePoint } from '../atlas/space-figure.ts';
 import { itemPoints } from './space-pieces.ts';
 import { placementOf, type Placement } from './space-view.ts';
@@ -31,22 +32,9 @@ function offSegment(p: SpacePoint, a: SpacePoint, b: SpacePoint): number {
   return Math.hypot(e[0]! - t * d[0]!, e[1]! - t * d[1]!, e[2]! - t * d[2]!);
 }
 
-/** Douglas–Peucker in 3-space: keeps first, last and every point needed so no dropped point lies farther than `tolerance`. */
+/** Douglas–Peucker in 3-space (simplify-polyline.ts): keeps first, last and every point needed so no dropped point lies farther than `tolerance` from its segment. */
 export function simplify3(points: readonly SpacePoint[], tolerance: number): SpacePoint[] {
-  if (points.length <= 2) return [...points];
-  const keep = new Uint8Array(points.length);
-  keep[0] = 1; keep[points.length - 1] = 1;
-  const stack: [number, number][] = [[0, points.length - 1]];
-  while (stack.length > 0) {
-    const [i, j] = stack.pop()!;
-    let worst = -1, far = 0;
-    for (let k = i + 1; k < j; k++) {
-      const d = offSegment(points[k]!, points[i]!, points[j]!);
-      if (d > far) { far = d; worst = k; }
-    }
-    if (worst >= 0 && far > tolerance) { keep[worst] = 1; stack.push([i, worst], [worst, j]); }
-  }
-  return points.filter((_, k) => keep[k] === 1);
+  return simplifyPolyline(points, tolerance, offSegment);
 }
 
 /**
