@@ -1,9 +1,8 @@
 import { defineProblem, type ComplexInput } from '../../../src/atlas/definition.ts';
-import type { FigureItem } from '../../../src/atlas/figure.ts';
-import { fitWindow } from '../shared/fit-window.ts';
+import type { SpaceItem } from '../../../src/atlas/space-figure.ts';
+import { clearestSight } from '../../../src/plots/clearest-sight.ts';
 import { genericInstance } from '../shared/generic-instance.ts';
 import { ENGINEERING_CAUTION } from '../shared/engineering-caution.ts';
-import { project } from '../shared/axonometric.ts';
 import { armOf, axesOf, skeletonOf, type ArmData } from './serial-arm-skeleton.ts';
 import { toolFrameOf, type Frame } from './denavit-hartenberg.ts';
 import type { Vector3 } from './vector3.ts';
@@ -15,16 +14,14 @@ const axisNames = (k: number) => ['x', 'y', 'z'].map((c) => `z${k}${c}`);
 const toolPoint = (p: Readonly<Record<string, number>>): Vector3 => [p.px!, p.py!, p.pz!];
 const toolAxis = (p: Readonly<Record<string, number>>): Vector3 => [p.wx!, p.wy!, p.wz!];
 
-const view = (v: Vector3): [number, number] => project(v[0], v[1], v[2]);
-
-function baseAndTarget(p: Readonly<Record<string, number>>): FigureItem[] {
+function baseAndTarget(p: Readonly<Record<string, number>>): SpaceItem[] {
   const tip = toolPoint(p), w = toolAxis(p);
   const reach = 0.25 * Math.max(...five.map((i) => Math.abs(p[`a${i}`]!)), ...[...five, 6].map((i) => Math.abs(p[`d${i}`]!)));
   return [
-    { shape: 'polyline', points: [view([0, 0, -reach]), view([0, 0, reach])], closed: false, layer: 'given', label: 'axis of joint 1' },
-    { shape: 'point', x: 0, y: 0, layer: 'given', label: 'base' },
-    { shape: 'polyline', points: [view(tip), view([tip[0] + reach * w[0], tip[1] + reach * w[1], tip[2] + reach * w[2]])], closed: false, layer: 'given', label: 'tool axis' },
-    { shape: 'point', x: view(tip)[0], y: view(tip)[1], layer: 'given', label: 'tool point' },
+    { shape: 'stick', from: [0, 0, -reach], to: [0, 0, reach], layer: 'given', label: 'axis of joint 1' },
+    { shape: 'dot', at: [0, 0, 0], layer: 'given', label: 'base' },
+    { shape: 'stick', from: tip, to: [tip[0] + reach * w[0], tip[1] + reach * w[1], tip[2] + reach * w[2]], layer: 'given', label: 'tool axis' },
+    { shape: 'dot', at: tip, layer: 'given', label: 'tool point' },
   ];
 }
 
@@ -130,14 +127,15 @@ export default defineProblem({
     },
   ],
   drawing: {
-    projection: 'An orthographic view of space: the scene turned 0.5 rad about the vertical z-axis (joint 1’s axis) and tilted 0.45 rad toward the viewer, so height goes up the page; each posture is drawn as its chain of offsets along the joint axes and lengths along the common normals, from the base origin to the tool point, with a dot on each joint axis where its common normal leaves it, the last at the tool point.',
-    window: (p, items) => fitWindow([...baseAndTarget(p), ...(items ?? [])]),
+    kind: 'space',
+    projection: 'Each posture is drawn as its chain of offsets along the joint axes and lengths along the common normals, from the base origin to the tool point, with a dot on each joint axis where its common normal leaves it, the last at the tool point; joint 1’s axis is the vertical z-axis.',
+    sight: (_, items) => clearestSight(items.filter((i) => i.layer === 'joints')),
     configuration: baseAndTarget,
-    solution: (values, p) => {
+    solution: (values, p): SpaceItem[] => {
       const skeleton = skeletonOf(axesOf(values, armOf(p), toolAxis(p)), armOf(p));
       return [
-        { shape: 'polyline', points: skeleton.map(view), closed: false, layer: 'solution', label: 'arm' },
-        ...[1, 2, 3, 4, 5, 6].map((i): FigureItem => { const [x, y] = view(skeleton[2 * i - 1]!); return { shape: 'point', x, y, layer: 'joints', label: `joint ${i}` }; }),
+        { shape: 'chain', points: skeleton.map((v) => [v[0], v[1], v[2]]), closed: false, layer: 'solution', label: 'arm' },
+        ...[1, 2, 3, 4, 5, 6].map((i): SpaceItem => ({ shape: 'dot', at: skeleton[2 * i - 1]!, layer: 'joints', label: `joint ${i}` })),
       ];
     },
   },
